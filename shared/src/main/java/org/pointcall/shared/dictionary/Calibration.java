@@ -1,0 +1,127 @@
+package org.pointcall.shared.dictionary;
+
+import java.util.Arrays;
+
+/** Raw-to-engineering-unit conversion of one parameter, applied once as a value enters the pipeline. */
+public sealed interface Calibration permits Calibration.Identity, Calibration.Polynomial, Calibration.Breakpoints {
+
+    double toEngineering(double raw);
+
+    Calibration IDENTITY = new Identity();
+
+    /** No conversion: the source already carries engineering units. */
+    record Identity() implements Calibration {
+        @Override
+        public double toEngineering(double raw) {
+            return raw;
+        }
+    }
+
+    /** EU = sum of c[i] raw^i (the TMATS COE convention: c[0] is the constant term). */
+    record Polynomial(double[] coefficients) implements Calibration {
+        public Polynomial {
+            if (coefficients.length == 0) {
+                throw new IllegalArgumentException("a polynomial calibration needs at least one coefficient");
+            }
+            coefficients = coefficients.clone();
+        }
+
+        @Override
+        public double toEngineering(double raw) {
+            double acc = 0.0;
+            for (int i = coefficients.length - 1; i >= 0; i--) {
+                acc = acc * raw + coefficients[i];
+            }
+            return acc;
+        }
+
+        @Override
+        public double[] coefficients() {
+            return coefficients.clone();
+        }
+
+        @Override
+        public boolean equals(Object o) {
+            return o instanceof Polynomial p && Arrays.equals(coefficients, p.coefficients);
+        }
+
+        @Override
+        public int hashCode() {
+            return Arrays.hashCode(coefficients);
+        }
+
+        @Override
+        public String toString() {
+            return "Polynomial" + Arrays.toString(coefficients);
+        }
+    }
+
+    /**
+     * Piecewise-linear table of (raw, EU) pairs with strictly increasing raw values; outside the table the end
+     * segments are extended linearly.
+     */
+    record Breakpoints(double[] raw, double[] eu) implements Calibration {
+        public Breakpoints {
+            if (raw.length < 2 || raw.length != eu.length) {
+                throw new IllegalArgumentException("a breakpoint table needs at least two (raw, eu) pairs of equal count");
+            }
+            for (int i = 1; i < raw.length; i++) {
+                if (!(raw[i] > raw[i - 1])) {
+                    throw new IllegalArgumentException("breakpoint raw values must increase strictly (index " + i + ")");
+                }
+            }
+            raw = raw.clone();
+            eu = eu.clone();
+        }
+
+        @Override
+        public double toEngineering(double x) {
+            int n = raw.length;
+            int hi;
+            if (x <= raw[0]) {
+                hi = 1;
+            } else if (x >= raw[n - 1]) {
+                hi = n - 1;
+            } else {
+                int lo = 0;
+                hi = n - 1;
+                while (hi - lo > 1) {
+                    int mid = (lo + hi) >>> 1;
+                    if (raw[mid] <= x) {
+                        lo = mid;
+                    } else {
+                        hi = mid;
+                    }
+                }
+            }
+            int lo = hi - 1;
+            double f = (x - raw[lo]) / (raw[hi] - raw[lo]);
+            return eu[lo] + f * (eu[hi] - eu[lo]);
+        }
+
+        @Override
+        public double[] raw() {
+            return raw.clone();
+        }
+
+        @Override
+        public double[] eu() {
+            return eu.clone();
+        }
+
+        @Override
+        public boolean equals(Object o) {
+            return o instanceof Breakpoints b && Arrays.equals(raw, b.raw) && Arrays.equals(eu, b.eu);
+        }
+
+        @Override
+        public int hashCode() {
+            return 31 * Arrays.hashCode(raw) + Arrays.hashCode(eu);
+        }
+
+        @Override
+        public String toString() {
+            return "Breakpoints" + Arrays.toString(raw) + "->" + Arrays.toString(eu);
+        }
+    }
+}
