@@ -20,6 +20,7 @@ import picocli.CommandLine.Command;
             "plan's limits or the flight manual."
         },
         subcommands = {
+            AirDataCommand.class,
             CommandLine.HelpCommand.class
         })
 public final class PointcallCommand implements Runnable {
