@@ -201,6 +201,11 @@ class AirDataTest {
         }
         // NASA TM-104316 (Haering) form T = Tt / (1 + 0.2 r M^2): at M 1, r 1 the rise is 20 %, by hand
         assertEquals(250.0, AirData.staticTemperatureK(300.0, 1.0, 1.0), 1e-12);
+        // a probe recovering 98 % of the rise: 1 + 0.2 * 0.98 * 1.5^2 = 1.441, by hand
+        assertEquals(300.0 / 1.441, AirData.staticTemperatureK(300.0, 1.5, 0.98), 1e-12);
+        assertEquals(288.15 * 1.441, AirData.totalTemperatureK(288.15, 1.5, 0.98), 1e-12);
+        // recovering nothing, the probe reads static temperature
+        assertEquals(300.0, AirData.staticTemperatureK(300.0, 2.0, 0.0), 0.0);
     }
 
     @Test
