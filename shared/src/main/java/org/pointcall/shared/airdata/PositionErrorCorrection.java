@@ -1,5 +1,6 @@
 package org.pointcall.shared.airdata;
 
+import org.pointcall.shared.error.Plain;
 import java.util.Arrays;
 
 /**

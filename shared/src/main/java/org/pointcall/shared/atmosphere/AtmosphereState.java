@@ -1,5 +1,7 @@
 package org.pointcall.shared.atmosphere;
 
+import org.pointcall.shared.error.Plain;
+
 /**
  * The air at one altitude, SI. Built by {@link #at(double)} for the standard day or by
  * {@link #atPressureAltitude(double, double)} for a day warmer or colder than standard.

@@ -1,5 +1,6 @@
 package org.pointcall.shared.atmosphere;
 
+import org.pointcall.shared.error.Plain;
 import org.pointcall.shared.units.Units;
 
 /**

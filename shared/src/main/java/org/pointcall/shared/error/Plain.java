@@ -1,19 +1,19 @@
-package org.pointcall.shared.atmosphere;
+package org.pointcall.shared.error;
 
 import java.math.BigDecimal;
 import java.math.MathContext;
 
 /**
- * Numbers for one-line messages: six significant digits, no trailing zeros, and no exponent unless the value is
+ * Numbers for one-line user messages: six significant digits, no trailing zeros, and no exponent unless the value is
  * absurdly large or small (then {@code 1E+300}).
  */
-final class Plain {
+public final class Plain {
     private Plain() {
     }
 
     private static final MathContext SIX = new MathContext(6);
 
-    static String of(double v) {
+    public static String of(double v) {
         if (Double.isNaN(v) || Double.isInfinite(v)) {
             return Double.toString(v);
         }
