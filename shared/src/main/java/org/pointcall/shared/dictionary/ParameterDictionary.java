@@ -87,6 +87,17 @@ public final class ParameterDictionary {
         }
     }
 
+    /** Equal when the name and every parameter, in order, are equal (files round-trip to an equal dictionary). */
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof ParameterDictionary d && name.equals(d.name) && parameters.equals(d.parameters);
+    }
+
+    @Override
+    public int hashCode() {
+        return 31 * name.hashCode() + parameters.hashCode();
+    }
+
     @Override
     public String toString() {
         return "ParameterDictionary[" + name + ", " + parameters.size() + " parameters, hash "

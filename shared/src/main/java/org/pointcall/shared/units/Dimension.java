@@ -16,5 +16,6 @@ public enum Dimension {
     FORCE,
     MASS,
     FRACTION,
-    RATE_OF_SPEED
+    RATE_OF_SPEED,
+    MASS_FLOW
 }

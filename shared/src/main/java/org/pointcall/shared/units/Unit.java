@@ -27,6 +27,7 @@ public enum Unit {
 
     KNOT_PER_SECOND("kt/s", Dimension.RATE_OF_SPEED, Units.MPS_PER_KT, 0.0),
     METRE_PER_SECOND_SQUARED_RATE("m/s/s", Dimension.RATE_OF_SPEED, 1.0, 0.0),
+    KNOT_PER_MINUTE("kt/min", Dimension.RATE_OF_SPEED, Units.MPS_PER_KT / 60.0, 0.0),
 
     METRE_PER_SECOND_SQUARED("m/s^2", Dimension.ACCELERATION, 1.0, 0.0, "m/s2"),
 
@@ -37,6 +38,7 @@ public enum Unit {
 
     DEGREE_PER_SECOND("deg/s", Dimension.ANGULAR_RATE, Units.RAD_PER_DEG, 0.0, "dps"),
     RADIAN_PER_SECOND("rad/s", Dimension.ANGULAR_RATE, 1.0, 0.0),
+    DEGREE_PER_MINUTE("deg/min", Dimension.ANGULAR_RATE, Units.RAD_PER_DEG / 60.0, 0.0),
 
     PASCAL("Pa", Dimension.PRESSURE, 1.0, 0.0, "pa"),
     HECTOPASCAL("hPa", Dimension.PRESSURE, Units.PA_PER_HPA, 0.0, "mbar", "hpa"),
@@ -56,7 +58,11 @@ public enum Unit {
     POUND_FORCE("lbf", Dimension.FORCE, Units.N_PER_LBF, 0.0),
 
     KILOGRAM("kg", Dimension.MASS, 1.0, 0.0),
-    POUND("lb", Dimension.MASS, Units.KG_PER_LB, 0.0, "lbm");
+    POUND("lb", Dimension.MASS, Units.KG_PER_LB, 0.0, "lbm"),
+
+    KILOGRAM_PER_SECOND("kg/s", Dimension.MASS_FLOW, 1.0, 0.0),
+    KILOGRAM_PER_HOUR("kg/h", Dimension.MASS_FLOW, 1.0 / 3600.0, 0.0),
+    POUND_PER_HOUR("lb/h", Dimension.MASS_FLOW, Units.KG_PER_LB / 3600.0, 0.0, "pph", "lb/hr");
 
     private static final Map<String, Unit> BY_SYMBOL = new TreeMap<>();
 
