@@ -21,6 +21,8 @@ import picocli.CommandLine.Command;
         },
         subcommands = {
             AirDataCommand.class,
+            CheckCommand.class,
+            ExamplesCommand.class,
             CommandLine.HelpCommand.class
         })
 public final class PointcallCommand implements Runnable {

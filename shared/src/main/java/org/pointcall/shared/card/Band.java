@@ -2,6 +2,7 @@ package org.pointcall.shared.card;
 
 import java.util.Objects;
 
+import org.pointcall.shared.error.Plain;
 import org.pointcall.shared.units.Unit;
 
 /**
@@ -112,5 +113,29 @@ public record Band(String parameter, String metric, BandPhase phase, String inst
     /** True when {@code valueSi} lies in the band, ends included; NaN is never inside. */
     public boolean contains(double valueSi) {
         return valueSi >= lowSi() && valueSi <= highSi();
+    }
+
+    /**
+     * The band in the card's own unit, as an engineer reads it: {@code 320 +/- 10 kt}, {@code -1 -0.2/+0.3 kt/s},
+     * {@code 88 to 102 kt}, {@code at most 800 ft}, {@code at least 0.5}.
+     */
+    public String describe() {
+        String u = unit.symbol().equals("1") ? "" : " " + unit.symbol();
+        if (isTarget()) {
+            String t = Plain.of(unit.fromSi(targetSi));
+            double minus = unit.deltaFromSi(tolMinusSi);
+            double plus = unit.deltaFromSi(tolPlusSi);
+            if (Double.compare(tolMinusSi, tolPlusSi) == 0) {
+                return t + " +/- " + Plain.of(plus) + u;
+            }
+            return t + " -" + Plain.of(minus) + "/+" + Plain.of(plus) + u;
+        }
+        if (Double.isInfinite(minSi)) {
+            return "at most " + Plain.of(unit.fromSi(maxSi)) + u;
+        }
+        if (Double.isInfinite(maxSi)) {
+            return "at least " + Plain.of(unit.fromSi(minSi)) + u;
+        }
+        return Plain.of(unit.fromSi(minSi)) + " to " + Plain.of(unit.fromSi(maxSi)) + u;
     }
 }
