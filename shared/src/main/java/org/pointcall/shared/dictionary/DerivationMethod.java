@@ -21,7 +21,7 @@ public enum DerivationMethod {
     TRUE_AIRSPEED("true-airspeed", Dimension.SPEED, List.of("mach", "static-temperature"),
             List.of(Dimension.DIMENSIONLESS, Dimension.TEMPERATURE)),
     /** Time derivative of one parameter (for example dH/dt from Hp, dV/dt from KTAS), by least squares. */
-    RATE("rate", null, List.of("signal"), List.of((Dimension) null)),
+    RATE("rate", null, List.of("signal"), java.util.Collections.singletonList((Dimension) null)),
     /** Specific excess power Ps = dh/dt + (V/g) dV/dt from altitude and true airspeed. */
     SPECIFIC_EXCESS_POWER("specific-excess-power", Dimension.SPEED, List.of("altitude", "true-airspeed"),
             List.of(Dimension.LENGTH, Dimension.SPEED));
