@@ -19,11 +19,17 @@ public record Problem(String source, int line, int column, String message) imple
         }
     }
 
-    /** {@code source:line:column: message}, the form compilers use, so editors can jump to it. */
+    /**
+     * {@code source:line:column: message}, the form compilers use, so editors can jump to it; the column is left out
+     * when unknown ({@code source:line: message}) and the line too when it is unknown.
+     */
     @Override
     public String toString() {
         if (line == 0) {
             return source + ": " + message;
+        }
+        if (column == 0) {
+            return source + ":" + line + ": " + message;
         }
         return source + ":" + line + ":" + column + ": " + message;
     }
