@@ -12,10 +12,10 @@ import java.util.regex.Pattern;
 
 import org.pointcall.shared.dictionary.Calibration;
 import org.pointcall.shared.dictionary.Parameter;
+import org.pointcall.shared.dictionary.DimensionRules;
 import org.pointcall.shared.dictionary.ParameterDictionary;
 import org.pointcall.shared.error.InputRejectedException;
 import org.pointcall.shared.error.Problem;
-import org.pointcall.shared.units.Dimension;
 import org.pointcall.shared.units.Unit;
 import org.pointcall.shared.units.Units;
 
@@ -196,7 +196,7 @@ final class HeaderBinder {
                 declared = true;
                 if (fileUnit.dimension() != p.unit().dimension()) {
                     fatal.add(new Problem(source, line, positions[i], "column '" + headers.get(i) + "' is in "
-                            + fileUnit.symbol() + ", but " + p.name() + " is " + words(p.unit().dimension()) + " ("
+                            + fileUnit.symbol() + ", but " + p.name() + " is " + DimensionRules.phrase(p.unit().dimension()) + " ("
                             + p.unit().symbol() + ")"));
                     continue;
                 }
@@ -326,26 +326,5 @@ final class HeaderBinder {
             sb.append(" and ").append(items.size() - shown).append(" more");
         }
         return sb.toString();
-    }
-
-    /** "a speed", "an angle": how a message names what a parameter measures. */
-    static String words(Dimension d) {
-        return switch (d) {
-            case DIMENSIONLESS -> "dimensionless";
-            case LENGTH -> "a length";
-            case SPEED -> "a speed";
-            case ACCELERATION -> "an acceleration";
-            case LOAD_FACTOR -> "a load factor";
-            case ANGLE -> "an angle";
-            case ANGULAR_RATE -> "an angular rate";
-            case PRESSURE -> "a pressure";
-            case TEMPERATURE -> "a temperature";
-            case DENSITY -> "a density";
-            case TIME -> "a time";
-            case FORCE -> "a force";
-            case MASS -> "a mass";
-            case FRACTION -> "a fraction";
-            case RATE_OF_SPEED -> "a rate of change of speed";
-        };
     }
 }
