@@ -20,6 +20,8 @@ public final class Frame {
     public static final int TIME_SUSPECT = 1 << 2;
     /** The frame came from a simulator or replay, not from a live aircraft. */
     public static final int SYNTHETIC = 1 << 3;
+    /** Part of the frame was lost in transport: those slots are NaN, the rest is as sent. */
+    public static final int PARTS_MISSING = 1 << 4;
 
     private final double[] values;
     private long timeNs;
