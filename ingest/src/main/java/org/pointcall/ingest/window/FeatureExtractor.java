@@ -101,7 +101,8 @@ public final class FeatureExtractor implements FrameSink {
             }
             double gapS = Double.isNaN(spec.maxGapS()) ? settings.gapFactor() / p.rateHz() : spec.maxGapS();
             long maxGapNs = Math.max(1L, Math.round(gapS * 1e9));
-            tracks[s] = new Track(slots[s], maxGapNs, lengthsNs, window, capacityFor(maxLengthS + periodNs * 1e-9, p.rateHz()));
+            int capacity = capacityFor(maxLengthS + periodNs * 1e-9, p.rateHz());
+            tracks[s] = new Track(slots[s], maxGapNs, lengthsNs, window, capacity);
             window += lengthsNs.length;
         }
         this.longestWindowNs = longest;

@@ -13,8 +13,8 @@ package org.pointcall.ingest.window;
  * does not cancel exactly in floating point, and after a large excursion has left the window its rounding errors
  * would swamp a quiet remainder until the next recompute; so the three value-dependent sums also carry their own
  * rounding error (Knuth's TwoSum, branch-free), which leaves only a second-order trace of departed samples. Min and
- * max come from the track's monotonic deques and are exact; a window whose min equals its max is constant, and gets a standard
- * deviation and slope of exactly 0.
+ * max come from the track's monotonic deques and are exact; a window whose min equals its max is constant, and gets
+ * a standard deviation and slope of exactly 0.
  */
 final class SlidingWindow {
     final Track track;

@@ -25,12 +25,13 @@ import org.pointcall.shared.units.Unit;
  * variance error <= ~9 n u R^2, slope error <= ~50 n u R L^2 / span^3 for times spread over the span
  * (S_tt ~ n span^2 / 12). The value sums are in fact compensated (TwoSum), which only lowers the first-order
  * error and leaves a second-order trace of samples that have left (~18 n u^2 times the range of the last 2 L, or
- * its square for the variance: below 1e-10 of R, or of R^2, even for a 1e6 step over 1e-3 noise). The checks allow
- * about 8 to 14 times those worst cases (real errors are far smaller): mean 4 eps A + c R; variance (compared instead of
- * std, so that small deviations stay meaningful) 4 c R^2; slope 16 c R L^2 / span^3 + 4 c |slope|. The references
- * (corrected two-pass mean and deviations, centred regression; Commons Math's two-pass Mean and Variance and its
- * centred updating SimpleRegression, fed values relative to the window's first) are at least as accurate, so the
- * same bounds cover their error. A constant window (R = 0) must give std and slope exactly 0.
+ * its square for the variance: below 1e-10 of R, or of R^2, even for a 1e6 step over 1e-3 noise). The checks
+ * allow about 8 to 14 times those worst cases (real errors are far smaller): mean 4 eps A + c R; variance
+ * (compared instead of std, so that small deviations stay meaningful) 4 c R^2; slope 16 c R L^2 / span^3
+ * + 4 c |slope|. The references (corrected two-pass mean and deviations, centred regression; Commons Math's
+ * two-pass Mean and Variance and its centred updating SimpleRegression, fed values relative to the window's first)
+ * are at least as accurate, so the same bounds cover their error. A constant window (R = 0) must give std and
+ * slope exactly 0.
  */
 final class ScenarioRun {
     static final double EPS = Math.ulp(1.0);
