@@ -34,6 +34,7 @@ public final class UdpSource implements AutoCloseable {
     private static final int SINK_ERRORS = 4;
 
     private final PacketDecoder decoder;
+    private final DatagramHandler handler;
     private final LongSupplier nowNs;
     private final DatagramChannel channel;
     private final FaultLog log;
@@ -47,9 +48,23 @@ public final class UdpSource implements AutoCloseable {
 
     /** @param nowNs receive-time clock, for example {@code System::nanoTime} */
     public UdpSource(UdpSourceConfig config, PacketDecoder decoder, LongSupplier nowNs) {
+        this(config, DatagramHandler.decoding(decoder), decoder, decoder.log(), nowNs);
+    }
+
+    /**
+     * A source that hands each accepted datagram to {@code handler} (for example the enqueueing side of a
+     * pipeline) instead of decoding it on the receive thread.
+     */
+    public UdpSource(UdpSourceConfig config, DatagramHandler handler, FaultLog log, LongSupplier nowNs) {
+        this(config, handler, null, log, nowNs);
+    }
+
+    private UdpSource(UdpSourceConfig config, DatagramHandler handler, PacketDecoder decoder, FaultLog log,
+                      LongSupplier nowNs) {
         this.decoder = decoder;
+        this.handler = handler;
         this.nowNs = nowNs;
-        this.log = decoder.log();
+        this.log = log;
         this.allowed = config.allowedSenders();
         this.anySender = config.anySender();
         DatagramChannel ch = null;
@@ -82,6 +97,7 @@ public final class UdpSource implements AutoCloseable {
         return receiveBufferBytes;
     }
 
+    /** The decoder of a source that decodes on its receive thread, else {@code null}. */
     public PacketDecoder decoder() {
         return decoder;
     }
@@ -96,7 +112,7 @@ public final class UdpSource implements AutoCloseable {
         thread.start();
     }
 
-    /** Receives until {@link #stop()}; then hands the decoder's half-assembled frames on. */
+    /** Receives until {@link #stop()}; then tells the handler (a decoder hands its half-assembled frames on). */
     public void run() {
         ByteBuffer buf = ByteBuffer.allocateDirect(1 << 16);
         while (!stopping) {
@@ -128,7 +144,7 @@ public final class UdpSource implements AutoCloseable {
                 continue;
             }
             try {
-                decoder.decode(buf, sender, now);
+                handler.onDatagram(buf, sender, now);
             } catch (RuntimeException e) {
                 c.lazySet(SINK_ERRORS, c.get(SINK_ERRORS) + 1);
                 if (log.admit(now)) {
@@ -137,7 +153,7 @@ public final class UdpSource implements AutoCloseable {
                 }
             }
         }
-        decoder.flushPending();
+        handler.onStop();
     }
 
     /** Same as {@link #stop()}. */
