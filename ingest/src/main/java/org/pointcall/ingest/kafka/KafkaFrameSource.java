@@ -66,6 +66,7 @@ public final class KafkaFrameSource implements AutoCloseable {
     private volatile long publishedRecords;
     private volatile long publishedBytes;
     private Thread thread;
+    private boolean closedUnstarted;
 
     // written by the poll thread only
     private long records;
@@ -98,8 +99,8 @@ public final class KafkaFrameSource implements AutoCloseable {
 
     /** Joins the group and starts the poll thread. */
     public synchronized void start() {
-        if (thread != null) {
-            throw new IllegalStateException("source already started");
+        if (thread != null || stopping) {
+            throw new IllegalStateException("a source starts once");
         }
         thread = new Thread(this::run, "kafka-frames-" + group);
         thread.setDaemon(true);
@@ -122,7 +123,10 @@ public final class KafkaFrameSource implements AutoCloseable {
             t = thread;
         }
         if (t == null) {
-            consumer.close(CloseOptions.timeout(COMMIT_TIMEOUT));
+            if (!closedUnstarted) {
+                closedUnstarted = true;
+                consumer.close(CloseOptions.timeout(COMMIT_TIMEOUT));
+            }
             return;
         }
         consumer.wakeup();

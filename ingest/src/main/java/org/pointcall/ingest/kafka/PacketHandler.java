@@ -11,7 +11,8 @@ public interface PacketHandler {
     /**
      * @param streamId    the record key decoded (see {@link StreamKey})
      * @param packet      the record value, from its position to its limit; valid only during the call (copy what
-     *                    you keep); the handler may move its position
+     *                    you keep); it may be a read-only view into the fetch buffer, so read it with its get
+     *                    methods rather than {@code array()}; the handler may move its position
      * @param timestampMs the record's time stamp, milliseconds since the epoch (producer time unless the topic
      *                    uses log-append time)
      * @param partition   partition the record came from

@@ -7,7 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
-/** The measurement itself needs Maven and two child JVMs: it is run by hand (see the module README). */
+/** The measurement itself needs Maven and two child JVMs: it is run by hand (see the package documentation). */
 class KafkaBenchTest {
     @Test
     void optionsParseAndBadOnesAreNamed() {
