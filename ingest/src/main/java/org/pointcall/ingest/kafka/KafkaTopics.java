@@ -1,6 +1,7 @@
 package org.pointcall.ingest.kafka;
 
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
@@ -10,7 +11,10 @@ import java.util.concurrent.TimeoutException;
 
 import org.apache.kafka.clients.admin.Admin;
 import org.apache.kafka.clients.admin.NewTopic;
+import org.apache.kafka.clients.admin.OffsetSpec;
+import org.apache.kafka.common.TopicPartition;
 import org.apache.kafka.common.config.TopicConfig;
+import org.apache.kafka.common.errors.RetriableException;
 import org.apache.kafka.common.errors.TopicExistsException;
 import org.pointcall.shared.error.PointcallException;
 
@@ -49,6 +53,34 @@ public final class KafkaTopics {
         }
     }
 
+    /**
+     * Waits until every partition of the new topics answers at its leader. A topic is announced before its leaders
+     * serve; an idempotent producer whose very first batch to a partition is refused then (not leader) while its
+     * next batches get in can never place that first batch, and loses it at its delivery timeout (seen with Kafka
+     * 4.4: the broker takes any first sequence number from a producer it has no state for).
+     */
+    private static void awaitServing(Admin admin, List<NewTopic> topics)
+            throws InterruptedException, ExecutionException, TimeoutException {
+        Map<TopicPartition, OffsetSpec> ask = new HashMap<>();
+        for (NewTopic t : topics) {
+            for (int p = 0; p < t.numPartitions(); p++) {
+                ask.put(new TopicPartition(t.name(), p), OffsetSpec.latest());
+            }
+        }
+        long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(ADMIN_TIMEOUT_S);
+        while (true) {
+            try {
+                admin.listOffsets(ask).all().get(ADMIN_TIMEOUT_S, TimeUnit.SECONDS);
+                return;
+            } catch (ExecutionException e) {
+                if (!(e.getCause() instanceof RetriableException) || System.nanoTime() > deadline) {
+                    throw e;
+                }
+                Thread.sleep(100);
+            }
+        }
+    }
+
     /** As {@link #ensure(KafkaSettings, int, short)} with an admin client the caller owns. */
     public static List<String> ensure(Admin admin, String prefix, int partitions, short replicationFactor) {
         if (partitions < 1 || replicationFactor < 1) {
@@ -84,6 +116,13 @@ public final class KafkaTopics {
                     }
                 }
             }
+            List<NewTopic> made = new ArrayList<>();
+            for (NewTopic t : wanted) {
+                if (created.contains(t.name())) {
+                    made.add(t);
+                }
+            }
+            awaitServing(admin, made);
             return created;
         } catch (ExecutionException e) {
             throw new PointcallException(where + ": cannot create (" + e.getCause().getMessage() + ")", e.getCause());
