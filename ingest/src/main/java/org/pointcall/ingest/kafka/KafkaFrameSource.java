@@ -114,7 +114,8 @@ public final class KafkaFrameSource implements AutoCloseable {
 
     /**
      * Stops polling, commits what was handled, leaves the group and closes the consumer; waits for all that (up to
-     * 30 s). The handler is not called after this returns.
+     * 30 s). The handler is not called after this returns, except when called from the handler itself, which
+     * only asks the loop to end.
      */
     public void stop() {
         Thread t;
@@ -131,6 +132,10 @@ public final class KafkaFrameSource implements AutoCloseable {
         }
         consumer.wakeup();
         LockSupport.unpark(t);
+        if (t == Thread.currentThread()) {
+            // called from the handler: the loop ends after this packet's batch
+            return;
+        }
         try {
             t.join(STOP_WAIT_MS);
         } catch (InterruptedException e) {
