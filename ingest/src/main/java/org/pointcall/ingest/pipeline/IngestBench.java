@@ -52,7 +52,7 @@ public final class IngestBench {
             l.add(f("ingest.speed", "%.1f x real time", realTimeMultiple()));
             l.add(f("crc32c.perFrame", "%.1f ns", crcNsPerFrame));
             l.add(f("ingest.toCrc32c", "%.2f x", toCrcRatio()));
-            l.add(f("ingest.allocated", "%d B per round", allocatedBytesPerRound));
+            l.add(f("ingest.allocated", "%d B per round (binding a fresh decoder and windows included)", allocatedBytesPerRound));
             l.add(f("ticks", "%d per round", ticks));
             return l;
         }

@@ -23,6 +23,7 @@ import picocli.CommandLine.Command;
             AirDataCommand.class,
             CheckCommand.class,
             ExamplesCommand.class,
+            BenchCommand.class,
             CommandLine.HelpCommand.class
         })
 public final class PointcallCommand implements Runnable {
