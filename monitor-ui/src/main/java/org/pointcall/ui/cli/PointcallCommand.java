@@ -23,6 +23,7 @@ import picocli.CommandLine.Command;
             AirDataCommand.class,
             CheckCommand.class,
             ExamplesCommand.class,
+            InspectCommand.class,
             BenchCommand.class,
             CommandLine.HelpCommand.class
         })
