@@ -18,6 +18,7 @@ import picocli.CommandLine.Model.CommandSpec;
 
 /** Standard-atmosphere and air-data calculator: one flight condition in, every air-data quantity out. */
 @Command(name = "airdata",
+        header = "Standard atmosphere and air data for one flight condition.",
         mixinStandardHelpOptions = true,
         description = {
             "Works out one flight condition from pressure altitude (or static pressure) and one speed,",

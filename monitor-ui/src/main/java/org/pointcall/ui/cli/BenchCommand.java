@@ -19,6 +19,7 @@ import picocli.CommandLine.Model.CommandSpec;
  * run against a baseline measured in the same run, and reported as ratios; nothing here is a pass/fail test.
  */
 @Command(name = "bench",
+        header = "Speed benchmarks of the ingest stage.",
         mixinStandardHelpOptions = true,
         description = "Speed benchmarks; each prints its figures and ratios as 'name: value unit'.",
         subcommands = {BenchCommand.Ingest.class, BenchCommand.Udp.class, BenchCommand.Kafka.class})
@@ -38,7 +39,7 @@ public final class BenchCommand implements Runnable {
         out.flush();
     }
 
-    @Command(name = "ingest", mixinStandardHelpOptions = true,
+    @Command(name = "ingest", mixinStandardHelpOptions = true, header = "W1 decode + features against a CRC-32C pass.",
             description = {"Workload W1 (256 parameters at 1,000 frames/s, features on 24) decoded from wire packets,",
                 "derived and windowed on one thread, against a CRC-32C pass over the same bytes."})
     static final class Ingest implements Runnable {
@@ -53,7 +54,7 @@ public final class BenchCommand implements Runnable {
         }
     }
 
-    @Command(name = "udp", mixinStandardHelpOptions = true,
+    @Command(name = "udp", mixinStandardHelpOptions = true, header = "UDP loopback: paced without loss, then overloaded.",
             description = {"UDP on loopback: a paced run that should lose nothing, then an overload run on purpose",
                 "that proves the loss counters right (lost from sequence gaps = sent - received)."})
     static final class Udp implements Runnable {
@@ -80,7 +81,7 @@ public final class BenchCommand implements Runnable {
         }
     }
 
-    @Command(name = "kafka", mixinStandardHelpOptions = true,
+    @Command(name = "kafka", mixinStandardHelpOptions = true, header = "Kafka sink against Kafka's own producer tool.",
             description = {"Frames to a Kafka broker through pointcall's sink against Kafka's own producer",
                 "performance tool, same broker, same record size, alternating rounds. Without --bootstrap it",
                 "starts a broker in a child JVM. Needs Maven on the PATH: the broker and the tool run from",

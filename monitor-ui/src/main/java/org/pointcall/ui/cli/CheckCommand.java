@@ -20,6 +20,7 @@ import picocli.CommandLine.Model.CommandSpec;
 
 /** Validates a parameter dictionary and a test card before a sortie, listing every problem at once. */
 @Command(name = "check",
+        header = "Validate a parameter dictionary and a test card.",
         mixinStandardHelpOptions = true,
         description = {
             "Reads a parameter dictionary and, if given, a test card, and reports every problem",

@@ -15,6 +15,7 @@ import picocli.CommandLine.Model.CommandSpec;
 
 /** Writes the demo dictionary and card, the starting point for a user's own files. */
 @Command(name = "examples",
+        header = "Write the demo dictionary and test card to a folder.",
         mixinStandardHelpOptions = true,
         description = {
             "Writes the demo parameter dictionary and test card (a fictional jet trainer on a",

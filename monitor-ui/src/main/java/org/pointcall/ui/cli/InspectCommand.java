@@ -24,6 +24,7 @@ import picocli.CommandLine.Model.CommandSpec;
 
 /** Reads a recorded time history through a dictionary and says what it found, before anyone analyses it. */
 @Command(name = "inspect",
+        header = "Read a recorded CSV/XLSX file and report what it holds.",
         mixinStandardHelpOptions = true,
         description = {
             "Reads a recorded file (CSV or XLSX) through a parameter dictionary, computes the derived",
