@@ -7,6 +7,13 @@ public sealed interface Calibration permits Calibration.Identity, Calibration.Po
 
     double toEngineering(double raw);
 
+    /**
+     * The raw value that gives {@code eu}: what a recorder writes for a calibrated channel (the simulator writes
+     * its files this way). NaN when the calibration cannot be inverted there (not monotonic, or outside a table
+     * that is not extended monotonically).
+     */
+    double toRaw(double eu);
+
     Calibration IDENTITY = new Identity();
 
     /** No conversion: the source already carries engineering units. */
@@ -14,6 +21,11 @@ public sealed interface Calibration permits Calibration.Identity, Calibration.Po
         @Override
         public double toEngineering(double raw) {
             return raw;
+        }
+
+        @Override
+        public double toRaw(double eu) {
+            return eu;
         }
     }
 
@@ -33,6 +45,34 @@ public sealed interface Calibration permits Calibration.Identity, Calibration.Po
                 acc = acc * raw + coefficients[i];
             }
             return acc;
+        }
+
+        /** Closed form for a linear polynomial; otherwise Newton's method from the linear estimate. */
+        @Override
+        public double toRaw(double eu) {
+            if (coefficients.length == 1) {
+                return Double.NaN;
+            }
+            double x = (eu - coefficients[0]) / coefficients[1];
+            if (coefficients.length == 2) {
+                return x;
+            }
+            for (int it = 0; it < 50; it++) {
+                double f = toEngineering(x) - eu;
+                double d = 0;
+                for (int i = coefficients.length - 1; i >= 1; i--) {
+                    d = d * x + i * coefficients[i];
+                }
+                if (d == 0) {
+                    return Double.NaN;
+                }
+                double step = f / d;
+                x -= step;
+                if (Math.abs(step) <= 1e-13 * Math.max(1, Math.abs(x))) {
+                    return x;
+                }
+            }
+            return Double.NaN;
         }
 
         @Override
@@ -97,6 +137,25 @@ public sealed interface Calibration permits Calibration.Identity, Calibration.Po
             int lo = hi - 1;
             double f = (x - raw[lo]) / (raw[hi] - raw[lo]);
             return eu[lo] + f * (eu[hi] - eu[lo]);
+        }
+
+        /** Inverse of the piecewise-linear table when its EU values are strictly monotonic, else NaN. */
+        @Override
+        public double toRaw(double y) {
+            int n = eu.length;
+            double sign = Math.signum(eu[n - 1] - eu[0]);
+            for (int i = 1; i < n; i++) {
+                if (!(sign * (eu[i] - eu[i - 1]) > 0)) {
+                    return Double.NaN;
+                }
+            }
+            int hi = 1;
+            while (hi < n - 1 && sign * (y - eu[hi]) > 0) {
+                hi++;
+            }
+            int lo = hi - 1;
+            double f = (y - eu[lo]) / (eu[hi] - eu[lo]);
+            return raw[lo] + f * (raw[hi] - raw[lo]);
         }
 
         @Override
