@@ -54,7 +54,7 @@ final class AirframeReader {
             problems.add(new Problem(source, 0, 0, "the file is empty; an airframe profile is a YAML mapping"));
             throw new InputRejectedException(problems);
         }
-        Section top = new Section("", root);
+        Section top = new Section("", root, null);
         String name = top.text("name");
         if (name != null && !name.matches(Airframe.NAME_PATTERN)) {
             top.problemAt("name", "name '" + name + "' must be lower-case letters, digits and dashes");
@@ -213,13 +213,16 @@ final class AirframeReader {
     private final class Section {
         private final String path;
         private final Node node;
+        /** Where the section is named in its parent (null at the top): missing keys are reported there. */
+        private final Node keyNode;
         private final Map<String, NodeTuple> entries = new LinkedHashMap<>();
         private final List<String> asked = new ArrayList<>();
         private final boolean present;
 
-        Section(String path, Node node) {
+        Section(String path, Node node, Node keyNode) {
             this.path = path;
             this.node = node;
+            this.keyNode = keyNode;
             if (node == null) {
                 present = false;
                 return;
@@ -265,7 +268,7 @@ final class AirframeReader {
             NodeTuple t = entries.get(key);
             if (t == null) {
                 if (required) {
-                    problem(node, "missing key '" + qualified(key) + "'");
+                    problem(keyNode != null ? keyNode : node, "missing key '" + qualified(key) + "'");
                 }
                 return null;
             }
@@ -356,7 +359,8 @@ final class AirframeReader {
 
         Section section(String key) {
             Node v = value(key, true);
-            return new Section(qualified(key), v);
+            NodeTuple t = present ? entries.get(key) : null;
+            return new Section(qualified(key), v, t == null ? null : t.getKeyNode());
         }
 
         /** A two-column table; {@code xScale} converts its first column to SI. */

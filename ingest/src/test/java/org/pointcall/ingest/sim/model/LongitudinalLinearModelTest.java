@@ -53,32 +53,32 @@ class LongitudinalLinearModelTest {
 
     @Test
     void textbookLightAircraftConfiguredFromItsDerivativesReproducesTheirMatrixEntries() {
-        FlightModel m = new FlightModel(Navion.airframe(), SimulationSettings.DEFAULT);
-        TrimPoint t = m.trim(Navion.U0_MPS, 0.0, 0.0);
+        FlightModel m = new FlightModel(TextbookLightAircraft.airframe(), SimulationSettings.DEFAULT);
+        TrimPoint t = m.trim(TextbookLightAircraft.U0_MPS, 0.0, 0.0);
         LongitudinalLinearModel lin = LongitudinalLinearModel.about(m, t);
-        double u0 = Navion.U0_MPS;
+        double u0 = TextbookLightAircraft.U0_MPS;
         // Nelson, Flight Stability and Automatic Control, 2nd ed., ch. 4: the longitudinal matrix is
         // [Xu Xw 0 -g; Zu Zw u0 0; Mu+Mwdot Zu, Mw+Mwdot Zw, Mq+Mwdot u0, 0; 0 0 1 0]. Central differences of a
         // smooth model are good to about 1e-8 relative; 1e-6 leaves room.
-        assertEquals(Navion.XU, lin.element(0, 0), 1e-6 * 0.045);
-        assertEquals(Navion.XW, lin.element(0, 1), 1e-6 * 0.036);
+        assertEquals(TextbookLightAircraft.XU, lin.element(0, 0), 1e-6 * 0.045);
+        assertEquals(TextbookLightAircraft.XW, lin.element(0, 1), 1e-6 * 0.036);
         assertEquals(-G0, lin.element(0, 3), 1e-6 * G0);
-        assertEquals(Navion.ZW, lin.element(1, 1), 1e-6 * 2.02);
+        assertEquals(TextbookLightAircraft.ZW, lin.element(1, 1), 1e-6 * 2.02);
         assertEquals(u0, lin.element(1, 2), 1e-6 * u0);
-        assertEquals(Navion.MW + Navion.MWDOT * Navion.ZW, lin.element(2, 1), 1e-6 * 0.2);
-        assertEquals(Navion.MQ + Navion.MWDOT * u0, lin.element(2, 2), 1e-6 * 3.0);
+        assertEquals(TextbookLightAircraft.MW + TextbookLightAircraft.MWDOT * TextbookLightAircraft.ZW, lin.element(2, 1), 1e-6 * 0.2);
+        assertEquals(TextbookLightAircraft.MQ + TextbookLightAircraft.MWDOT * u0, lin.element(2, 2), 1e-6 * 3.0);
         // a model whose lift equals its weight has Zu = -2 CL0 qS/(m u0) = -2 g/u0 (Nelson's expression with
         // CLu = 0): -0.3656/s, where the book prints -0.369 (it rounds CL0 = W/(qS) = 0.406 to 0.41)
         double zu = -2.0 * G0 / u0;
         assertEquals(zu, lin.element(1, 0), 1e-6 * 0.37);
-        assertEquals(Navion.MWDOT * zu, lin.element(2, 0), 1e-6 * 0.01);
+        assertEquals(TextbookLightAircraft.MWDOT * zu, lin.element(2, 0), 1e-6 * 0.01);
         assertEquals(1.0, lin.element(3, 2), 0.0);
     }
 
     @Test
     void textbookLightAircraftModesMatchThePublishedEigenvalues() {
-        FlightModel m = new FlightModel(Navion.airframe(), SimulationSettings.DEFAULT);
-        Mode[] modes = modes(LongitudinalLinearModel.about(m, m.trim(Navion.U0_MPS, 0.0, 0.0)).a());
+        FlightModel m = new FlightModel(TextbookLightAircraft.airframe(), SimulationSettings.DEFAULT);
+        Mode[] modes = modes(LongitudinalLinearModel.about(m, m.trim(TextbookLightAircraft.U0_MPS, 0.0, 0.0)).a());
         Mode sp = modes[0];
         Mode ph = modes[1];
         // published short period -2.489 +/- 2.601i, omega_n 3.600, zeta 0.691 (check-values.md, Nelson's example,
@@ -125,7 +125,7 @@ class LongitudinalLinearModelTest {
             // Lanchester: omega_p = sqrt(2) g / u0 (check-values.md). His model holds the angle of attack constant
             // (infinitely stiff in pitch) and the lift slope independent of speed. The finite stiffness lowers the
             // frequency by sqrt(-Malpha / omega_sp^2) (the two-mode factorisation of the longitudinal quartic;
-            // with the Navion's derivatives it turns Lanchester's 0.2598 rad/s into 0.2142 against the exact
+            // with the textbook light aircraft's derivatives it turns Lanchester's 0.2598 rad/s into 0.2142 against the exact
             // 0.2141 [computed]); Prandtl-Glauert adds CLu = CL M^2/(1 - M^2) to Zu = -(2 CL + CLu) qS/(m u0)
             // (Nelson), raising it by sqrt(1 + CLu / 2CL).
             double lanchester = Math.sqrt(2.0) * G0 / c.u0;
@@ -133,8 +133,8 @@ class LongitudinalLinearModelTest {
             double stiffness = Math.sqrt(-c.mAlpha / (spOmega * spOmega));
             double compressibility = Math.sqrt(1.0 + c.clU / (2.0 * c.clTrim));
             double known = Math.abs(1.0 - stiffness * compressibility);
-            // Lanchester alone is off by about the size of those two effects (the Navion's is 21%, with a
-            // stiffness factor of 0.82; this jet's is 0.92)...
+            // Lanchester alone is off by about the size of those two effects (the textbook light aircraft's is 21%,
+            // with a stiffness factor of 0.82; this jet's is 0.92)...
             assertTrue(Math.abs(ph.wn() / lanchester - 1.0) < known + 0.02,
                     "Lanchester off by " + (ph.wn() / lanchester - 1.0) + ", known effects " + known);
             // ...and with them the approximation agrees within 2%: what is left is the thrust's change with Mach and

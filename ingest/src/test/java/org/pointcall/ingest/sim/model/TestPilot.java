@@ -43,7 +43,7 @@ final class TestPilot {
         thetaCmd = trim.thetaRad();
         thetaInt = trim.thetaRad();
         throttle = trim.throttle();
-        throttleInt = trim.throttle();
+        throttleInt = 0.0;
         aileronInt = trim.aileronRad();
         rudderInt = trim.rudderRad();
         altitudeCmd = trim.altitudeM();
@@ -121,10 +121,16 @@ final class TestPilot {
             thetaCmd = thetaInt + 1.2 * e;
         }
         if (speedByThrottle) {
+            // thrust to balance drag and the climb, plus an acceleration toward the target speed (10 s time
+            // constant, small integral), turned into a lever position through the engine's current full thrust
             double e = speedCmd - v;
-            throttleInt += 0.03 * e * DT_S;
-            throttleInt = Math.max(0.0, Math.min(1.0, throttleInt));
-            throttle = throttleInt + 0.08 * e;
+            throttleInt += 0.01 * e * DT_S;
+            double accel = 0.1 * e + throttleInt;
+            double needed = (m.dragN() + m.weightN() * Math.sin(m.flightPathRad()) + m.massKg() * accel)
+                    / Math.cos(m.alphaRad());
+            double idle = af.engine().idleThrustFraction();
+            double full = m.thrustN() / (idle + (1.0 - idle) * m.powerLevel());
+            throttle = (needed / full - idle) / (1.0 - idle);
         }
 
         // pitch attitude: a second-order response at 2.5 rad/s, damping 0.8, through the elevator's control power
@@ -159,14 +165,21 @@ final class TestPilot {
     private double[] lateral(double q, double s) {
         double lda = Math.abs(af.lateral().cRollAileron()) * q * s * af.geometry().spanM() / af.mass().ixxKgM2();
         double wr = 1.5;
-        double rollAccel = wr * wr * wrap(bankCmd - m.phiRad()) - 2.0 * 0.9 * wr * m.pRadS();
+        // damp the roll rate beyond the steady turn's own, p = -omega sin(theta)
+        double omega = 9.80665 * Math.tan(m.phiRad()) / m.trueAirspeedMps();
+        double pTurn = -omega * Math.sin(m.thetaRad());
+        double rollAccel = wr * wr * wrap(bankCmd - m.phiRad()) - 2.0 * 0.9 * wr * (m.pRadS() - pTurn);
         aileronInt -= 0.3 * rollAccel / lda * DT_S;
         double da = aileronInt - rollAccel / lda;
 
-        // ball centred: rudder against the lateral load factor (positive rudder yaws nose left)
+        // ball centred: a slow integral of the lateral load factor (positive rudder yaws nose left), and a yaw
+        // damper on the yaw rate beyond the steady turn's, adding about 2/s of yaw damping
+        double ndr = Math.abs(af.lateral().cnRudder()) * q * s * af.geometry().spanM() / af.mass().izzKgM2();
         double ny = m.ny();
-        rudderInt += 1.5 * ny * DT_S;
-        double dr = rudderInt + 0.5 * ny;
+        double v = m.trueAirspeedMps();
+        double rTurn = 9.80665 * Math.sin(m.phiRad()) * Math.cos(m.thetaRad()) / v;
+        rudderInt += 0.5 * ny * DT_S;
+        double dr = rudderInt + 0.3 * ny + 2.0 / ndr * (m.rRadS() - rTurn);
         return new double[] {da, dr};
     }
 

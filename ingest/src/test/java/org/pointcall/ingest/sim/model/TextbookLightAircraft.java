@@ -15,7 +15,8 @@ import org.pointcall.shared.atmosphere.StandardAtmosphere;
 import org.pointcall.shared.units.Units;
 
 /**
- * The textbook light aircraft of Nelson, Flight Stability and Automatic Control, 2nd ed., ch. 4, as a profile of this
+ * The example light aircraft of Nelson, Flight Stability and Automatic Control, 2nd ed., ch. 4 (the book's Navion
+ * data; check-values.md), as a profile of this
  * flight model: its published dimensional longitudinal derivatives at sea level and 176 ft/s are turned back into
  * the nondimensional coefficients the model takes, so that the model, trimmed at that condition and linearised
  * numerically, should reproduce them. Test data only, not a shipped airframe.
@@ -24,8 +25,8 @@ import org.pointcall.shared.units.Units;
  * [memory] of the same book; they cancel out, since every derivative is converted back with them, so other values
  * would reproduce the same dimensional model.
  */
-final class Navion {
-    private Navion() {
+final class TextbookLightAircraft {
+    private TextbookLightAircraft() {
     }
 
     // Nelson's dimensional derivatives (per second, ft units), [table] of check-values.md
@@ -82,7 +83,7 @@ final class Navion {
         Engine engine = new Engine(2.0 * cd * qs, 0.0, 0.8, new Curve(new double[] {0, 1}, new double[] {1, 1}),
                 1.0, 1.0, 0.0, 0.0, 0.0);
         Surface s = new Surface(Math.toRadians(-25), Math.toRadians(25), Math.toRadians(60), 0.05);
-        return new Airframe("textbook-navion", "Nelson's example light aircraft (test data)",
+        return new Airframe("textbook-light-aircraft", "Nelson's example light aircraft (test data)",
                 new MassProperties(MASS_KG - 100.0, 100.0, 1048.0 * SLUG_FT2, IYY, 3530.0 * SLUG_FT2, 0.0),
                 new Geometry(AREA_M2, SPAN_M, CHORD_M), lon, lat, stall, engine, new ControlSurfaces(s, s, s),
                 new PositionErrorCorrection.Table(new double[] {0, 1}, new double[] {0, 0}));
