@@ -13,6 +13,7 @@ import org.pointcall.shared.airdata.AirData;
 import org.pointcall.shared.airdata.PositionErrorCorrection;
 import org.pointcall.shared.atmosphere.StandardAtmosphere;
 import org.pointcall.shared.error.Plain;
+import org.pointcall.shared.error.PointcallException;
 
 /**
  * Six-degree-of-freedom flight model of one airframe: rigid body over a flat earth in NED axes, quaternion
@@ -370,8 +371,9 @@ public final class FlightModel {
         }
         double h = -x[DOWN];
         if (!(h > -4000.0 && h < 60000.0)) {
-            throw new IllegalStateException("the aircraft left the simulated airspace at " + Plain.of(h)
-                    + " m altitude (t = " + Plain.of(timeS()) + " s)");
+            // a scenario's pilot flew it out of the model (there is no ground): one line for the user
+            throw new PointcallException("the aircraft left the simulated airspace at " + Plain.of(h)
+                    + " m altitude (t = " + Plain.of(timeS()) + " s); the model spans -4000 to 60000 m");
         }
     }
 

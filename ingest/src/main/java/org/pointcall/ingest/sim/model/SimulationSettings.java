@@ -7,7 +7,7 @@ import org.pointcall.shared.error.Plain;
  * How a flight model runs: its fixed step rate, the seed of everything random in it (turbulence, the side of a wing
  * drop), the steady wind and the turbulence.
  *
- * @param stepRateHz physics steps per second, 100 to 20,000 (500 by default)
+ * @param stepRateHz physics steps per second, 500 to 20,000 (500 by default)
  * @param seed       one seed for the whole model; the same seed and inputs give the same bytes of state
  * @param wind       steady wind
  * @param turbulence turbulence
@@ -19,8 +19,8 @@ public record SimulationSettings(double stepRateHz, long seed, Wind wind, Turbul
             new SimulationSettings(FlightModel.DEFAULT_STEP_RATE_HZ, 1L, Wind.CALM, TurbulenceSettings.NONE);
 
     public SimulationSettings {
-        if (!(stepRateHz >= 100.0 && stepRateHz <= 20000.0)) {
-            throw new IllegalArgumentException("step rate must be between 100 and 20000 Hz, got "
+        if (!(stepRateHz >= 500.0 && stepRateHz <= 20000.0)) {
+            throw new IllegalArgumentException("step rate must be between 500 and 20000 Hz, got "
                     + Plain.of(stepRateHz));
         }
         Objects.requireNonNull(wind, "wind");
