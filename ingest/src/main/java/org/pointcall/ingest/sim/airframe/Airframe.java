@@ -7,7 +7,7 @@ import org.pointcall.shared.airdata.PositionErrorCorrection;
  * One airframe profile: everything the flight model needs to fly it and the static-source calibration the sensor
  * models need to make its air data look measured.
  *
- * @param name              file key, lower case, digits and dashes ({@code tervik-jt4})
+ * @param name              file key, lower case, digits and dashes ({@code veskarn-02})
  * @param description       one line for listings
  * @param mass              mass and inertia
  * @param geometry          reference geometry

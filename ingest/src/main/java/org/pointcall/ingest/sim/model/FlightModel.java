@@ -23,7 +23,7 @@ import org.pointcall.shared.error.PointcallException;
  *
  * <h2>Use</h2>
  * <pre>
- *   FlightModel m = new FlightModel(Airframes.load("tervik-jt4"), SimulationSettings.DEFAULT);
+ *   FlightModel m = new FlightModel(Airframes.load("veskarn-02"), SimulationSettings.DEFAULT);
  *   m.initialise(m.trim(150.0, 3000.0, 0.0), 0.0, 0.0, headingRad);
  *   loop: m.setControls(elevatorRad, aileronRad, rudderRad, throttle); m.advance(0.01); read m.nz(), m.alphaRad()...
  * </pre>

@@ -17,7 +17,7 @@ import org.pointcall.shared.error.PointcallException;
 import org.pointcall.shared.error.Problem;
 
 class AirframesTest {
-    private static final String[] BUILT_IN = {"tervik-jt4", "quillon-tp3", "sparrel-a1"};
+    private static final String[] BUILT_IN = {"veskarn-02", "quillon-tp3", "sparrel-a1"};
 
     private static String resource(String name) throws IOException {
         try (InputStream in = Airframes.class.getResourceAsStream("/org/pointcall/ingest/sim/airframes/" + name
@@ -47,7 +47,7 @@ class AirframesTest {
 
     @Test
     void theThreeDifferInScaleAndCharacter() {
-        Airframe jet = Airframes.load("tervik-jt4");
+        Airframe jet = Airframes.load("veskarn-02");
         Airframe turboprop = Airframes.load("quillon-tp3");
         Airframe aerobatic = Airframes.load("sparrel-a1");
         // wing loading at full fuel, kg/m^2: common practice for the classes ([memory]): jet trainers about 250
@@ -83,7 +83,7 @@ class AirframesTest {
 
     @Test
     void aBadProfileIsRefusedWithEveryProblemLocated(@TempDir Path dir) throws IOException {
-        String text = resource("tervik-jt4")
+        String text = resource("veskarn-02")
                 .replace("  CLalpha: 4.7", "  CLalhpa: 4.7")
                 .replace("  spanM: 9.6", "  spanM: wide")
                 .replace("  Cmq: -13.0", "  Cmq: 13.0")
@@ -148,7 +148,7 @@ class AirframesTest {
                 .contains("must be a mapping"));
 
         PointcallException unknown = assertThrows(PointcallException.class, () -> Airframes.load("no-such-jet"));
-        assertEquals("no built-in airframe named 'no-such-jet'; built in: tervik-jt4, quillon-tp3, sparrel-a1",
+        assertEquals("no built-in airframe named 'no-such-jet'; built in: veskarn-02, quillon-tp3, sparrel-a1",
                 unknown.getMessage());
         Path missing = dir.resolve("missing.yaml");
         assertEquals(missing + ": no such file",

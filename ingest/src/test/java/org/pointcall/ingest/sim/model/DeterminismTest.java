@@ -20,7 +20,7 @@ class DeterminismTest {
 
     /** A 60 s run through turbulence, with a stall in it (so the wing-drop draw is exercised too). */
     private static long[] run(long seed) {
-        FlightModel m = new FlightModel(Airframes.load("tervik-jt4"), TURBULENT.withSeed(seed));
+        FlightModel m = new FlightModel(Airframes.load("veskarn-02"), TURBULENT.withSeed(seed));
         TrimPoint t = m.trim(90.0, 400.0, 0.0);
         m.initialise(t, 0, 0, 0);
         for (int i = 0; i < 6000; i++) {
@@ -74,7 +74,7 @@ class DeterminismTest {
         assumeTrue(mx instanceof com.sun.management.ThreadMXBean, "JVM without per-thread allocation counts");
         com.sun.management.ThreadMXBean threads = (com.sun.management.ThreadMXBean) mx;
         assumeTrue(threads.isThreadAllocatedMemorySupported() && threads.isThreadAllocatedMemoryEnabled());
-        FlightModel m = new FlightModel(Airframes.load("tervik-jt4"), TURBULENT);
+        FlightModel m = new FlightModel(Airframes.load("veskarn-02"), TURBULENT);
         TrimPoint t = m.trim(150.0, 500.0, 0.0);
         m.initialise(t, 0, 0, 0);
         // warm up past the compiler's tiers: the counter would otherwise see the interpreter's transitions

@@ -22,7 +22,7 @@ class FlightModelOutputsTest {
 
     @Test
     void airDataAtAKnownConditionMatchesThePublishedAirspeedRelations() {
-        FlightModel m = new FlightModel(Airframes.load("tervik-jt4"), SimulationSettings.DEFAULT);
+        FlightModel m = new FlightModel(Airframes.load("veskarn-02"), SimulationSettings.DEFAULT);
         double h = geometricOf(Units.ftToM(10000));
         m.initialise(m.trim(Units.ktToMps(288.7), h, 0.0), 0, 0, 0);
         // check-values.md [computed], NASA RP-1046 relations: 250 KCAS at 10,000 ft is M 0.4523 and 288.7 KTAS
@@ -42,7 +42,7 @@ class FlightModelOutputsTest {
 
     @Test
     void theStaticSourceReadsTheProfilesPositionErrorAtItsIndicatedMach() {
-        Airframe af = Airframes.load("tervik-jt4");
+        Airframe af = Airframes.load("veskarn-02");
         FlightModel m = new FlightModel(af, SimulationSettings.DEFAULT);
         for (double v : new double[] {80.0, 140.0, 200.0}) {
             m.initialise(m.trim(v, 2000.0, 0.0), 0, 0, 0);
@@ -63,7 +63,7 @@ class FlightModelOutputsTest {
 
     @Test
     void surfacesFollowTheirCommandsNoFasterThanTheRateLimitAndStopAtTheTravel() {
-        Airframe af = Airframes.load("tervik-jt4");
+        Airframe af = Airframes.load("veskarn-02");
         FlightModel m = new FlightModel(af, SimulationSettings.DEFAULT);
         TrimPoint t = m.trim(150.0, 3000.0, 0.0);
         m.initialise(t, 0, 0, 0);
@@ -86,7 +86,7 @@ class FlightModelOutputsTest {
 
     @Test
     void theEngineLagsTheLeverSlowerFromIdleAndBurnsFuel() {
-        FlightModel m = new FlightModel(Airframes.load("tervik-jt4"), SimulationSettings.DEFAULT);
+        FlightModel m = new FlightModel(Airframes.load("veskarn-02"), SimulationSettings.DEFAULT);
         TrimPoint t = m.trim(150.0, 3000.0, 0.0);
         m.initialise(t, 0, 0, 0);
         double fuel0 = m.fuelMassKg();

@@ -100,7 +100,7 @@ class LongitudinalLinearModelTest {
     @Test
     void jetTrainerShortPeriodMatchesTheTwoDegreeOfFreedomApproximation() {
         for (double speed : new double[] {104.0, 139.0, 209.0}) {
-            Case c = new Case("tervik-jt4", speed, 3000.0);
+            Case c = new Case("veskarn-02", speed, 3000.0);
             Mode sp = modes(c.lin.a())[0];
             // Nelson ch. 4 short-period approximation: omega = sqrt(Zalpha Mq / u0 - Malpha),
             // zeta = -(Mq + Malphadot + Zalpha / u0) / (2 omega), with Zalpha = -(CLalpha + CD) qS/m,
@@ -119,7 +119,7 @@ class LongitudinalLinearModelTest {
     @Test
     void jetTrainerPhugoidDiffersFromLanchesterByTheTwoEffectsHisModelLeavesOut() {
         for (double speed : new double[] {104.0, 139.0}) {
-            Case c = new Case("tervik-jt4", speed, 3000.0);
+            Case c = new Case("veskarn-02", speed, 3000.0);
             Mode[] modes = modes(c.lin.a());
             Mode ph = modes[1];
             // Lanchester: omega_p = sqrt(2) g / u0 (check-values.md). His model holds the angle of attack constant

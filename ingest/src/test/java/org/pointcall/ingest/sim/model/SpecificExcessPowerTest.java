@@ -29,7 +29,7 @@ class SpecificExcessPowerTest {
 
     @Test
     void levelAccelerationExcessPowerFromTheForcesMatchesTheTrajectory() {
-        FlightModel m = new FlightModel(Airframes.load("tervik-jt4"), SimulationSettings.DEFAULT);
+        FlightModel m = new FlightModel(Airframes.load("veskarn-02"), SimulationSettings.DEFAULT);
         TrimPoint t = m.trim(100.0, 3000.0, 0.0);
         m.initialise(t, 0, 0, 0);
         TestPilot pilot = new TestPilot(m, t).holdAltitude(3000.0).throttle(1.0);

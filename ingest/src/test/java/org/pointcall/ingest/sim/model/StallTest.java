@@ -62,8 +62,8 @@ class StallTest {
 
     @Test
     void wingsLevelStallAtOneKnotPerSecondGivesTheTextbookStallSpeed() {
-        Peak p = stallRun("tervik-jt4", 1L, true);
-        FlightModel m = new FlightModel(Airframes.load("tervik-jt4"), SimulationSettings.DEFAULT);
+        Peak p = stallRun("veskarn-02", 1L, true);
+        FlightModel m = new FlightModel(Airframes.load("veskarn-02"), SimulationSettings.DEFAULT);
         double clMax = m.maxLiftCoefficient(p.mach());
         double rho = StandardAtmosphere.densityKgM3(StandardAtmosphere.geopotentialFromGeometricM(p.altitudeM()));
         double s = m.airframe().geometry().wingAreaM2();
@@ -85,7 +85,7 @@ class StallTest {
 
     @Test
     void turningStallSpeedRisesAsTheSquareRootOfTheLoadFactor() {
-        FlightModel m = new FlightModel(Airframes.load("tervik-jt4"), SimulationSettings.DEFAULT);
+        FlightModel m = new FlightModel(Airframes.load("veskarn-02"), SimulationSettings.DEFAULT);
         double level = lowestTrim(m, 0.0);
         double a = StandardAtmosphere.speedOfSoundMps(StandardAtmosphere.geopotentialFromGeometricM(H));
         // 30 and 45 degrees: at 60 degrees this airframe at 3000 m runs out of thrust before it runs out of lift
@@ -155,7 +155,7 @@ class StallTest {
 
     @Test
     void flowSeparatesAtTheStallAngleAndReattachesOnlyWellBelowIt() {
-        Airframe af = Airframes.load("tervik-jt4");
+        Airframe af = Airframes.load("veskarn-02");
         FlightModel m = new FlightModel(af, SimulationSettings.DEFAULT);
         TrimPoint t = m.trim(1.3 * m.oneGStallSpeedMps(H), H, 0.0);
         m.initialise(t, 0, 0, 0);

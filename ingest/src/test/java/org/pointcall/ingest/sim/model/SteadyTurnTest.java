@@ -32,7 +32,7 @@ class SteadyTurnTest {
 
     @Test
     void jetTrainerAt250KtasAnd45DegreesTurnsOnTheTextbookRadiusAndRate() {
-        FlightModel m = new FlightModel(Airframes.load("tervik-jt4"), SimulationSettings.DEFAULT);
+        FlightModel m = new FlightModel(Airframes.load("veskarn-02"), SimulationSettings.DEFAULT);
         double v = Units.ktToMps(250);
         double phi = Math.toRadians(45);
         TrimPoint t = m.trim(v, 3000.0, 0.0);

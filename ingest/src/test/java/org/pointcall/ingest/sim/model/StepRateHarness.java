@@ -22,7 +22,7 @@ public final class StepRateHarness {
         SimulationSettings rough = calm.withTurbulence(TurbulenceSettings.standard(TurbulenceIntensity.MODERATE));
         System.out.printf("%-12s %-10s %14s %10s %16s %10s%n", "airframe", "air", "steps/s", "x real", "sortie steps/s",
                 "x real");
-        for (String name : new String[] {"tervik-jt4", "quillon-tp3", "sparrel-a1"}) {
+        for (String name : new String[] {"veskarn-02", "quillon-tp3", "sparrel-a1"}) {
             for (SimulationSettings s : new SimulationSettings[] {calm, rough}) {
                 double raw = rate(name, s, seconds, false);
                 double sortie = rate(name, s, seconds, true);

@@ -46,7 +46,7 @@ class TrimTest {
 
     @Test
     void climbingAndDescendingTrimsBalanceAlongAndAcrossTheFlightPath() {
-        FlightModel m = new FlightModel(Airframes.load("tervik-jt4"), SimulationSettings.DEFAULT);
+        FlightModel m = new FlightModel(Airframes.load("veskarn-02"), SimulationSettings.DEFAULT);
         for (double gammaDeg : new double[] {-2.5, 3.0, 8.0}) {
             double gamma = Math.toRadians(gammaDeg);
             TrimPoint t = m.trim(130.0, 2000.0, gamma);
@@ -63,7 +63,7 @@ class TrimTest {
 
     @Test
     void coordinatedTurnTrimHasNoSideForceAndTheLoadFactorOfItsLiftBank() {
-        FlightModel m = new FlightModel(Airframes.load("tervik-jt4"), SimulationSettings.DEFAULT);
+        FlightModel m = new FlightModel(Airframes.load("veskarn-02"), SimulationSettings.DEFAULT);
         for (double phiDeg : new double[] {30.0, 45.0, 60.0}) {
             double phi = Math.toRadians(phiDeg);
             TrimPoint t = m.trimTurn(130.0, 3000.0, phi);
@@ -90,7 +90,7 @@ class TrimTest {
 
     @Test
     void belowTheStallSpeedThereIsNoTrimAndTheMessageSaysWhy() {
-        FlightModel m = new FlightModel(Airframes.load("tervik-jt4"), SimulationSettings.DEFAULT);
+        FlightModel m = new FlightModel(Airframes.load("veskarn-02"), SimulationSettings.DEFAULT);
         double vs = m.oneGStallSpeedMps(3000.0);
         NoTrimException e = assertThrows(NoTrimException.class, () -> m.trim(0.9 * vs, 3000.0, 0.0));
         assertTrue(e.getMessage().contains("CLmax"), e.getMessage());
@@ -116,7 +116,7 @@ class TrimTest {
     @Test
     void trimIsRelativeToTheAirSoASteadyWindOnlyAddsToTheGroundSpeed() {
         SimulationSettings windy = SimulationSettings.DEFAULT.withWind(Wind.from(0.0, 15.0));
-        FlightModel m = new FlightModel(Airframes.load("tervik-jt4"), windy);
+        FlightModel m = new FlightModel(Airframes.load("veskarn-02"), windy);
         TrimPoint t = m.trim(120.0, 3000.0, 0.0);
         m.initialise(t, 0, 0, 0.0);
         assertEquals(120.0, m.trueAirspeedMps(), 1e-9);
