@@ -33,6 +33,14 @@ public record UdpSenderConfig(InetSocketAddress target, InetSocketAddress bind, 
         return new UdpSenderConfig(new InetSocketAddress(lo, port), new InetSocketAddress(lo, 0), 0, 0);
     }
 
+    /** To {@code target}, from any free port (on loopback when the target is), unpaced. */
+    public static UdpSenderConfig to(InetSocketAddress target) {
+        InetAddress from = target.getAddress() != null && target.getAddress().isLoopbackAddress()
+                ? InetAddress.getLoopbackAddress() : null;
+        return new UdpSenderConfig(target, from == null ? new InetSocketAddress(0) : new InetSocketAddress(from, 0),
+                0, 0);
+    }
+
     public UdpSenderConfig withPacketsPerSecond(double pps) {
         return new UdpSenderConfig(target, bind, sendBufferBytes, pps);
     }
