@@ -29,12 +29,20 @@ public final class CsvWriter implements FrameSink, AutoCloseable {
     private final StringBuilder row = new StringBuilder(1024);
     private long rows;
 
-    /** Writes the measured parameters (derived ones are left to the reader's dictionary). */
+    /** Writes the measured parameters as a recorder would (derived ones are left to the reader's dictionary). */
     public static CsvWriter create(Path file, ParameterDictionary dictionary) {
-        return new CsvWriter(file, dictionary, false);
+        return new CsvWriter(file, dictionary, false, false);
     }
 
-    public CsvWriter(Path file, ParameterDictionary dictionary, boolean includeDerived) {
+    /**
+     * Writes every parameter, derived ones included, in engineering units under the parameters' own names: an
+     * export for a person or another tool, not a recording.
+     */
+    public static CsvWriter engineering(Path file, ParameterDictionary dictionary) {
+        return new CsvWriter(file, dictionary, true, true);
+    }
+
+    private CsvWriter(Path file, ParameterDictionary dictionary, boolean includeDerived, boolean engineering) {
         this.file = file;
         int n = 0;
         for (Parameter p : dictionary.parameters()) {
@@ -49,9 +57,10 @@ public final class CsvWriter implements FrameSink, AutoCloseable {
         for (int i = 0; i < dictionary.size(); i++) {
             Parameter p = dictionary.parameter(i);
             if (includeDerived || !p.isDerived()) {
-                calibrations[k] = p.calibration();
+                calibrations[k] = engineering ? org.pointcall.shared.dictionary.Calibration.IDENTITY : p.calibration();
                 slots[k++] = i;
-                header.append(',').append(p.column()).append(" [").append(p.unit().symbol()).append(']');
+                header.append(',').append(engineering ? p.name() : p.column()).append(" [").append(p.unit().symbol())
+                        .append(']');
             }
         }
         try {

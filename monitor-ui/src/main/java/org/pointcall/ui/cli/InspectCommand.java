@@ -7,6 +7,7 @@ import java.util.Locale;
 import java.util.concurrent.Callable;
 
 import org.pointcall.ingest.derive.DerivedParameters;
+import org.pointcall.ingest.file.CsvWriter;
 import org.pointcall.ingest.file.ReadOptions;
 import org.pointcall.ingest.file.ReadReport;
 import org.pointcall.ingest.file.RecordedFileSource;
@@ -45,6 +46,10 @@ public final class InspectCommand implements Callable<Integer> {
     @Option(names = "--sheet", paramLabel = "NAME", description = "XLSX sheet (default: the first)")
     String sheet;
 
+    @Option(names = "--export", paramLabel = "FILE",
+            description = "also write every parameter, derived ones included, in engineering units to a CSV file")
+    Path export;
+
     @Spec
     CommandSpec spec;
 
@@ -66,9 +71,13 @@ public final class InspectCommand implements Callable<Integer> {
         Arrays.fill(max, Double.NEGATIVE_INFINITY);
         DerivedParameters derived = DerivedParameters.bind(dict);
         ReadReport report;
-        try (RecordedFileSource src = RecordedFiles.open(input, dict, opts)) {
+        try (RecordedFileSource src = RecordedFiles.open(input, dict, opts);
+             CsvWriter exported = export == null ? null : CsvWriter.engineering(export, dict)) {
             report = src.readAll(f -> {
                 derived.apply(f);
+                if (exported != null) {
+                    exported.onFrame(f);
+                }
                 for (int i = 0; i < n; i++) {
                     double v = f.value(i);
                     if (!Double.isNaN(v)) {
