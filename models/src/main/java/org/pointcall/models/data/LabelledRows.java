@@ -208,7 +208,7 @@ public final class LabelledRows {
                 m.put(CLASS_NAMES.get(k), c[k]);
             }
         }
-        return m;
+        return java.util.Collections.unmodifiableMap(m);
     }
 
     /** The rows at {@code rowIndices}, in that order (an index may repeat); same features and sorties. */

@@ -61,6 +61,8 @@ public final class LabelFiles {
         byte[] bytes;
         try {
             bytes = Files.readAllBytes(file);
+        } catch (java.nio.file.NoSuchFileException e) {
+            throw new InputRejectedException(List.of(new Problem(source, 0, 0, "no such label file")));
         } catch (IOException e) {
             throw new InputRejectedException(List.of(new Problem(source, 0, 0, "cannot read the label file: "
                     + e.getMessage())));
