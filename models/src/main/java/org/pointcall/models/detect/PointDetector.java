@@ -1,0 +1,571 @@
+package org.pointcall.models.detect;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Locale;
+import java.util.Objects;
+
+import org.pointcall.ingest.frame.Frame;
+import org.pointcall.shared.dictionary.ParameterDictionary;
+import org.pointcall.shared.kind.ManoeuvreKind;
+
+/**
+ * The streaming point detector: {@link Smoother smoothing}, one {@link Hysteresis} per kind on the smoothed
+ * probability (enter and leave), one debounced threshold per kind on the raw probability (where begin and end lie),
+ * merging of short gaps, one open point at a time with takeover and {@link KindSwitch kind switches}, minimum
+ * durations and {@link GuardRule guard rules}. See the package documentation for the sequence of decisions.
+ *
+ * <p>Per tick the work is O(classes) and per frame O(bound quantities + rules of tracked kinds); nothing is
+ * allocated in either except when an event is emitted. Single-threaded.
+ */
+public final class PointDetector implements Detector {
+    private static final long NONE = PointEvent.UNKNOWN_NS;
+    private static final int IDLE = 0;
+    private static final int ACTIVE = 1;
+    private static final int CLOSING = 2;
+    private static final int MAX_FEATURES = 8;
+
+    private final ClassLayout classes;
+    private final DetectorSettings settings;
+    private final DetectorListener listener;
+    private final StateBinder binder;
+    private final PhysicalState state = new PhysicalState();
+    private final Smoother smoother;
+
+    private final int[] kindClasses;
+    private final Hysteresis[] channel;
+    private final Hysteresis[] edge;
+    private final GuardRule[][] rules;
+    private final long[] candidateNs;
+    private final double[] confSum;
+    private final long[] confCount;
+    private final double[] keptSum;
+    private final long[] keptCount;
+    private final double[] smoothed;
+    private final String[] features = new String[MAX_FEATURES];
+
+    private final long maxRefineNs;
+    private final long mergeGapNs;
+    private final long maxTickGapNs;
+    private final double edgeProbability;
+    private final double switchMargin;
+
+    private long floorNs = NONE;
+    private long lastTickNs = NONE;
+    private long lastFrameNs = NONE;
+    private long lastEndNs = NONE;
+
+    private int phase = IDLE;
+    private int pointClass = -1;
+    private long pointId;
+    private long beginNs;
+    private long begunAtNs;
+    private long leaveNs;
+    private long endEstimateNs;
+    private boolean confirmed;
+    private int merges;
+    private int featureCount;
+    private String switchNote;
+
+    private long ticksAccepted;
+    private long ticksRejected;
+    private long framesRejected;
+    private long tickGaps;
+    private long eventsEmitted;
+
+    /**
+     * @param binder   fills the physical state from frames
+     * @param classes  what each probability is
+     * @param settings thresholds and times
+     * @param listener receives the events
+     */
+    public PointDetector(StateBinder binder, ClassLayout classes, DetectorSettings settings,
+                         DetectorListener listener) {
+        this.binder = Objects.requireNonNull(binder, "binder");
+        this.classes = Objects.requireNonNull(classes, "classes");
+        this.settings = Objects.requireNonNull(settings, "settings");
+        this.listener = Objects.requireNonNull(listener, "listener");
+        int n = classes.size();
+        this.smoother = settings.smoothing().create(settings.smoothingS(), n);
+        this.smoothed = new double[n];
+        this.channel = new Hysteresis[n];
+        this.edge = new Hysteresis[n];
+        this.rules = new GuardRule[n][];
+        this.candidateNs = new long[n];
+        this.confSum = new double[n];
+        this.confCount = new long[n];
+        this.keptSum = new double[n];
+        this.keptCount = new long[n];
+        int kinds = 0;
+        for (int c = 0; c < n; c++) {
+            if (classes.kind(c) != null) {
+                kinds++;
+            }
+        }
+        this.kindClasses = new int[kinds];
+        int i = 0;
+        for (int c = 0; c < n; c++) {
+            ManoeuvreKind k = classes.kind(c);
+            if (k == null) {
+                rules[c] = new GuardRule[0];
+                continue;
+            }
+            kindClasses[i++] = c;
+            channel[c] = new Hysteresis(settings.enterProbability(), settings.enterS(), settings.leaveProbability(),
+                    settings.leaveS());
+            edge[c] = new Hysteresis(settings.edgeProbability(), settings.edgeDebounceS(),
+                    settings.edgeProbability(), settings.edgeDebounceS());
+            rules[c] = GuardRules.forKind(k, settings);
+        }
+        this.maxRefineNs = Math.round(settings.maxRefineS() * 1e9);
+        this.mergeGapNs = Math.round(settings.mergeGapS() * 1e9);
+        this.maxTickGapNs = Math.round(settings.maxTickGapS() * 1e9);
+        this.edgeProbability = settings.edgeProbability();
+        this.switchMargin = settings.switchMargin();
+        resetRun(NONE);
+    }
+
+    /** Binds quantities to the dictionary's default names ({@link StateBinder#bind(ParameterDictionary)}). */
+    public static PointDetector bind(ParameterDictionary dictionary, ClassLayout classes, DetectorSettings settings,
+                                     DetectorListener listener) {
+        return new PointDetector(StateBinder.bind(dictionary), classes, settings, listener);
+    }
+
+    @Override
+    public void init(long timeNs) {
+        resetRun(timeNs);
+    }
+
+    private void resetRun(long timeNs) {
+        floorNs = timeNs;
+        lastTickNs = NONE;
+        lastFrameNs = NONE;
+        lastEndNs = NONE;
+        phase = IDLE;
+        pointClass = -1;
+        pointId = 0;
+        featureCount = 0;
+        switchNote = null;
+        smoother.reset();
+        state.clear();
+        for (int c : kindClasses) {
+            channel[c].reset();
+            edge[c].reset();
+            candidateNs[c] = NONE;
+            restart(c, NONE);
+        }
+    }
+
+    @Override
+    public void onFrame(Frame frame) {
+        long t = frame.timeNs();
+        if (lastFrameNs != NONE && t <= lastFrameNs || floorNs != NONE && t < floorNs) {
+            framesRejected++;
+            return;
+        }
+        lastFrameNs = t;
+        binder.fill(frame, state);
+        for (int c : kindClasses) {
+            if (tracking(c)) {
+                GuardRule[] rs = rules[c];
+                for (int r = 0; r < rs.length; r++) {
+                    rs[r].onState(state);
+                }
+            }
+        }
+    }
+
+    @Override
+    public void onTick(long timeNs, double[] classProbabilities) {
+        onTick(timeNs, classProbabilities, null);
+    }
+
+    @Override
+    public void onTick(long timeNs, double[] p, String[] topFeatures) {
+        if (p.length != smoothed.length) {
+            throw new IllegalArgumentException("expected " + smoothed.length + " class probabilities "
+                    + classes.names() + ", got " + p.length);
+        }
+        if (lastTickNs != NONE && timeNs <= lastTickNs || floorNs != NONE && timeNs < floorNs) {
+            ticksRejected++;
+            return;
+        }
+        for (int c = 0; c < p.length; c++) {
+            if (!Double.isFinite(p[c])) {
+                ticksRejected++;
+                return;
+            }
+        }
+        if (lastTickNs != NONE && timeNs - lastTickNs > maxTickGapNs) {
+            tickGap();
+        }
+        lastTickNs = timeNs;
+        ticksAccepted++;
+        smoother.smooth(timeNs, p, smoothed);
+        for (int c : kindClasses) {
+            channel[c].update(timeNs, smoothed[c]);
+            edge[c].update(timeNs, p[c]);
+            boolean owned = phase != IDLE && c == pointClass;
+            if (!owned) {
+                long cand = edge[c].riseNs();
+                if (cand != candidateNs[c]) {
+                    candidateNs[c] = cand;
+                    restart(c, cand);
+                }
+            }
+            if (owned || candidateNs[c] != NONE) {
+                confSum[c] += smoothed[c];
+                confCount[c]++;
+                if (p[c] > edgeProbability) {
+                    keptSum[c] = confSum[c];
+                    keptCount[c] = confCount[c];
+                    GuardRule[] rs = rules[c];
+                    for (int r = 0; r < rs.length; r++) {
+                        rs[r].mark();
+                    }
+                }
+            }
+        }
+        decide(timeNs, topFeatures);
+    }
+
+    private boolean tracking(int c) {
+        return phase != IDLE && c == pointClass || candidateNs[c] != NONE;
+    }
+
+    private void restart(int c, long atNs) {
+        GuardRule[] rs = rules[c];
+        for (int r = 0; r < rs.length; r++) {
+            rs[r].start(atNs);
+        }
+        confSum[c] = 0;
+        confCount[c] = 0;
+        keptSum[c] = 0;
+        keptCount[c] = 0;
+    }
+
+    private void tickGap() {
+        // after a silence, entry must be earned again from fresh data; the open point keeps its own timers
+        tickGaps++;
+        smoother.reset();
+        for (int c : kindClasses) {
+            if (phase == IDLE || c != pointClass) {
+                channel[c].reset();
+                edge[c].reset();
+            }
+        }
+    }
+
+    private void decide(long now, String[] top) {
+        if (phase == IDLE) {
+            int c = strongestOn(-1);
+            if (c >= 0) {
+                begin(c, now, top);
+            }
+            return;
+        }
+        int k = pointClass;
+        if (phase == ACTIVE) {
+            if (channel[k].isOn()) {
+                int j = strongestOn(k);
+                if (j >= 0 && smoothed[j] > smoothed[k] + switchMargin) {
+                    takeOver(k, j, now, top);
+                } else {
+                    confirmIfReady(now);
+                }
+                return;
+            }
+            phase = CLOSING;
+            leaveNs = channel[k].edgeNs();
+            endEstimateNs = fallEstimate(k);
+        }
+        if (channel[k].isOn()) {
+            if (channel[k].edgeNs() - leaveNs <= mergeGapNs) {
+                phase = ACTIVE;
+                merges++;
+            } else {
+                close(now, endEstimateNs, null);
+                begin(k, now, top);
+            }
+            return;
+        }
+        if (!edge[k].isOn() || edge[k].pendingNs() != NONE) {
+            // once the raw probability is back above the edge for good, the fall found before stands
+            endEstimateNs = fallEstimate(k);
+        }
+        int j = strongestOn(k);
+        if (j >= 0) {
+            close(now, endEstimateNs, null);
+            begin(j, now, top);
+            return;
+        }
+        long rising = channel[k].pendingNs();
+        boolean riseInGap = rising != NONE && rising - leaveNs <= mergeGapNs;
+        if (now - leaveNs > mergeGapNs && !riseInGap) {
+            close(now, endEstimateNs, null);
+        }
+    }
+
+    /** The class with its channel on and the highest smoothed probability, other than {@code except}; or -1. */
+    private int strongestOn(int except) {
+        int best = -1;
+        for (int c : kindClasses) {
+            if (c != except && channel[c].isOn() && (best < 0 || smoothed[c] > smoothed[best])) {
+                best = c;
+            }
+        }
+        return best;
+    }
+
+    /** Where the raw probability of the open point's kind fell below the edge, near the leave. */
+    private long fallEstimate(int k) {
+        long f = edge[k].fallNs();
+        if (f == NONE || f < beginNs) {
+            f = leaveNs;
+        }
+        f = Math.max(leaveNs - maxRefineNs, Math.min(leaveNs + maxRefineNs, f));
+        return Math.max(f, beginNs);
+    }
+
+    /** Where the raw probability of class {@code c} rose above the edge, within reach of its entry. */
+    private long riseEstimate(int c) {
+        long anchor = channel[c].edgeNs();
+        long rise = edge[c].riseNs();
+        if (rise == NONE || rise > anchor) {
+            rise = anchor;
+        }
+        return Math.max(rise, anchor - maxRefineNs);
+    }
+
+    private void begin(int c, long now, String[] top) {
+        long b = riseEstimate(c);
+        if (lastEndNs != NONE) {
+            b = Math.max(b, lastEndNs);
+        }
+        if (candidateNs[c] == NONE) {
+            restart(c, b);
+        }
+        pointId++;
+        phase = ACTIVE;
+        pointClass = c;
+        beginNs = b;
+        begunAtNs = now;
+        confirmed = false;
+        merges = 0;
+        switchNote = null;
+        featureCount = 0;
+        if (top != null) {
+            for (int i = 0; i < top.length && featureCount < MAX_FEATURES && top[i] != null; i++) {
+                features[featureCount++] = top[i];
+            }
+        }
+        List<String> ev = new ArrayList<>();
+        addFeatures(ev);
+        ev.add("entered: smoothed p(" + classes.name(c) + ") above " + settings.enterProbability() + " for "
+                + settings.enterS() + " s from " + seconds(channel[c].edgeNs()) + " s");
+        emit(PointEvent.Type.BEGUN, now, NONE, List.of(), ev, liveConfidence(c));
+    }
+
+    private void takeOver(int k, int j, long now, String[] top) {
+        ManoeuvreKind from = classes.kind(k);
+        ManoeuvreKind to = classes.kind(j);
+        channel[k].reset();
+        candidateNs[k] = NONE;
+        if (settings.allowsSwitch(from, to)) {
+            String note = "switched from " + from.key() + " to " + to.key() + " at " + seconds(now) + " s";
+            switchNote = switchNote == null ? note : switchNote + "; " + note;
+            pointClass = j;
+            confirmed = false;
+            if (candidateNs[j] == NONE) {
+                restart(j, now);
+            }
+            List<String> ev = new ArrayList<>();
+            addFeatures(ev);
+            ev.add(switchNote);
+            emit(PointEvent.Type.REFINED, now, NONE, List.of(), ev, liveConfidence(j));
+            return;
+        }
+        long jBegin = riseEstimate(j);
+        long f = edge[k].fallNs();
+        long end = f != NONE && f >= beginNs ? Math.min(f, jBegin) : jBegin;
+        close(now, Math.max(end, beginNs), "ended when " + to.key() + " took over");
+        begin(j, now, top);
+    }
+
+    private void confirmIfReady(long now) {
+        if (confirmed) {
+            return;
+        }
+        GuardRule[] rs = rules[pointClass];
+        boolean any = false;
+        for (int r = 0; r < rs.length; r++) {
+            if (rs[r].confirmsLive()) {
+                if (rs[r].liveOutcome() != RuleOutcome.PASSED) {
+                    return;
+                }
+                any = true;
+            }
+        }
+        if (!any) {
+            return;
+        }
+        confirmed = true;
+        List<String> ev = new ArrayList<>();
+        List<KeyInstant> keys = new ArrayList<>();
+        for (GuardRule r : rs) {
+            if (r.confirmsLive()) {
+                ev.add("confirmed by " + r.name() + ": " + r.explain(true));
+                r.keyInstants(true, keys);
+            }
+        }
+        keys.sort(Comparator.comparingLong(KeyInstant::timeNs));
+        emit(PointEvent.Type.REFINED, now, NONE, keys, ev, liveConfidence(pointClass));
+    }
+
+    /** Ends the open point at {@code endNs}, judges it and says ENDED or DISCARDED. */
+    private void close(long now, long endNs, String note) {
+        int k = pointClass;
+        ManoeuvreKind kind = classes.kind(k);
+        long end = Math.max(endNs, beginNs);
+        List<String> ev = new ArrayList<>();
+        addFeatures(ev);
+        if (switchNote != null) {
+            ev.add(switchNote);
+        }
+        if (merges > 0) {
+            ev.add("merged across " + merges + (merges == 1 ? " gap" : " gaps") + " up to " + settings.mergeGapS()
+                    + " s");
+        }
+        boolean ok = true;
+        double durationS = (end - beginNs) / 1e9;
+        double minS = settings.minDurationS(kind);
+        String duration = "min-duration: " + String.format(Locale.ROOT, "%.2f s (needs %.2f s)", durationS, minS);
+        if (durationS < minS) {
+            ok = false;
+            ev.add("failed " + duration);
+        } else {
+            ev.add("passed " + duration);
+        }
+        List<KeyInstant> keys = new ArrayList<>();
+        for (String name : GuardRules.namesFor(kind)) {
+            if (!settings.ruleEnabled(name)) {
+                ev.add("disabled " + name);
+            }
+        }
+        for (GuardRule r : rules[k]) {
+            RuleOutcome o = r.outcome();
+            String line = r.name() + ": " + r.explain(false);
+            if (o == RuleOutcome.PASSED) {
+                ev.add("passed " + line);
+            } else if (o == RuleOutcome.FAILED) {
+                ok = false;
+                ev.add("failed " + line);
+            } else {
+                ev.add("unchecked " + line);
+            }
+            r.keyInstants(false, keys);
+        }
+        if (kind.hasInstant("start")) {
+            keys.add(new KeyInstant("start", beginNs));
+        }
+        if (kind.hasInstant("end")) {
+            keys.add(new KeyInstant("end", end));
+        }
+        keys.sort(Comparator.comparingLong(KeyInstant::timeNs));
+        if (note != null) {
+            ev.add(note);
+        }
+        double conf = keptCount[k] > 0 ? keptSum[k] / keptCount[k] : liveConfidence(k);
+        emit(ok ? PointEvent.Type.ENDED : PointEvent.Type.DISCARDED, now, end, keys, ev, conf);
+        if (ok) {
+            lastEndNs = end;
+        }
+        phase = IDLE;
+        pointClass = -1;
+        candidateNs[k] = edge[k].riseNs();
+        restart(k, candidateNs[k]);
+    }
+
+    @Override
+    public void finish(long timeNs) {
+        long now = lastTickNs == NONE ? timeNs : Math.max(timeNs, lastTickNs);
+        if (phase == ACTIVE) {
+            long f = edge[pointClass].fallNs();
+            close(now, f != NONE && f >= beginNs ? f : now, "ended by finish");
+        } else if (phase == CLOSING) {
+            close(now, endEstimateNs, "ended by finish");
+        }
+        resetRun(NONE);
+        floorNs = now;
+        lastTickNs = now;
+    }
+
+    private double liveConfidence(int c) {
+        return confCount[c] > 0 ? confSum[c] / confCount[c] : smoothed[c];
+    }
+
+    private void addFeatures(List<String> ev) {
+        for (int i = 0; i < featureCount; i++) {
+            ev.add("feature " + features[i]);
+        }
+    }
+
+    private void emit(PointEvent.Type type, long now, long end, List<KeyInstant> keys, List<String> ev,
+                      double confidence) {
+        eventsEmitted++;
+        double conf = Math.max(0.0, Math.min(1.0, confidence));
+        listener.onPointEvent(new PointEvent(type, pointId, classes.kind(pointClass), beginNs, end, now, begunAtNs,
+                conf, keys, ev));
+    }
+
+    private static String seconds(long ns) {
+        return String.format(Locale.ROOT, "%.3f", ns / 1e9);
+    }
+
+    @Override
+    public PhysicalState state() {
+        return state;
+    }
+
+    public ClassLayout classes() {
+        return classes;
+    }
+
+    public DetectorSettings settings() {
+        return settings;
+    }
+
+    /** True while a point is open (begun, not yet ended or discarded). */
+    public boolean pointOpen() {
+        return phase != IDLE;
+    }
+
+    /** Kind of the open point, or null. */
+    public ManoeuvreKind openKind() {
+        return phase == IDLE ? null : classes.kind(pointClass);
+    }
+
+    public long ticksAccepted() {
+        return ticksAccepted;
+    }
+
+    /** Ticks dropped: not after the previous one, before {@link #init}'s time, or holding a non-finite value. */
+    public long ticksRejected() {
+        return ticksRejected;
+    }
+
+    /** Frames dropped because their time was not after the previous frame's. */
+    public long framesRejected() {
+        return framesRejected;
+    }
+
+    /** Silences longer than {@link DetectorSettings#maxTickGapS()} between ticks. */
+    public long tickGaps() {
+        return tickGaps;
+    }
+
+    public long eventsEmitted() {
+        return eventsEmitted;
+    }
+}
