@@ -15,7 +15,8 @@ import org.pointcall.shared.atmosphere.StandardAtmosphere;
  * derivatives (what the pilot's feel for the aircraft amounts to), so one set flies all three airframes.
  *
  * <p>Each channel is either closed (a law runs) or held (a fixed deflection); when a closed law takes over from a
- * held surface its integrator is set so that the surface does not jump (bumpless transfer).
+ * held surface its integrator takes what the surface holds beyond the steady law at the present state, so that
+ * only the new command's proportional terms move it (bumpless transfer).
  */
 final class Loops {
     private static final double G = SensedState.G;
@@ -205,7 +206,11 @@ final class Loops {
                 / lon.cmElevator();
         double base = ff + kAlpha * (s.alphaRad - alphaCmd) + kq * (s.qRadS - qRefRadS);
         if (pitchHeld) {
-            elevatorI = elevator - base;
+            // bumpless: the integrator takes what the surface holds beyond the steady law at the present state,
+            // not the proportional terms of a command that has just moved
+            double ffNow = -(lon.cm0() + lon.cmAlpha() * s.alphaRad + lon.cmQ() * s.qRadS * halfChordOverV)
+                    / lon.cmElevator();
+            elevatorI = elevator - ffNow;
             pitchHeld = false;
         }
         double raw = base + elevatorI;
@@ -248,7 +253,9 @@ final class Loops {
                 / lat.cRollAileron();
         double base = ff + kp * (pHat - pHatCmd);
         if (rollHeld) {
-            aileronI = aileron - base;
+            double ffNow = -(lat.cRollP() * pHat + lat.cRollBeta() * s.betaRad + lat.cRollRudder() * rudder)
+                    / lat.cRollAileron();
+            aileronI = aileron - ffNow;
             rollHeld = false;
         }
         double raw = base + aileronI;
@@ -277,7 +284,9 @@ final class Loops {
         double ff = -(lat.cnBeta() * b + lat.cnAileron() * aileron + lat.cnP() * s.pRadS * halfSpanOverV) / lat.cnRudder();
         double base = ff - kb * (s.betaRad - b) + kr * (s.rRadS - rRef);
         if (yawHeld) {
-            rudderI = rudder - base;
+            double ffNow = -(lat.cnBeta() * s.betaRad + lat.cnAileron() * aileron
+                    + lat.cnP() * s.pRadS * halfSpanOverV) / lat.cnRudder();
+            rudderI = rudder - ffNow;
             yawHeld = false;
         }
         double raw = base + rudderI;
@@ -328,7 +337,7 @@ final class Loops {
         double perLever = envelope.thrustGPerLever(rho, s.mach, s.massKg);
         double base = KP_THROTTLE * e / perLever;
         if (throttleHeld) {
-            throttleI = throttle - base;
+            throttleI = throttle;
             throttleHeld = false;
         }
         double raw = base + throttleI;

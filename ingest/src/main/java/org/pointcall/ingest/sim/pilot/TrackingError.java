@@ -6,7 +6,8 @@ import java.util.SplittableRandom;
  * The pilot's seeded imperfection: small quick errors on what it commands (g, bank, sideslip) and slow drifts of
  * what it believes the targets to be (altitude, speed, heading), each a first-order Gauss-Markov process with the
  * stated standard deviation and correlation time. Sizes are those of a careful pilot on a test point (common
- * practice): a few hundredths of a g, half a degree of bank, a dozen feet, half a knot.
+ * practice): a few thousandths of a g, half a degree of bank, a few feet and a few tenths of a knot drifting over a
+ * minute or so.
  */
 final class TrackingError {
     private static final double NZ_G = 0.008;
@@ -15,12 +16,12 @@ final class TrackingError {
     private static final double BANK_TAU_S = 1.5;
     private static final double BETA_RAD = Math.toRadians(0.12);
     private static final double BETA_TAU_S = 2.0;
-    private static final double ALT_M = 3.5;
-    private static final double ALT_TAU_S = 25.0;
-    private static final double SPEED_MPS = 0.25;
-    private static final double SPEED_TAU_S = 25.0;
-    private static final double HEADING_RAD = Math.toRadians(0.8);
-    private static final double HEADING_TAU_S = 30.0;
+    private static final double ALT_M = 2.0;
+    private static final double ALT_TAU_S = 60.0;
+    private static final double SPEED_MPS = 0.2;
+    private static final double SPEED_TAU_S = 60.0;
+    private static final double HEADING_RAD = Math.toRadians(0.6);
+    private static final double HEADING_TAU_S = 60.0;
 
     private final SplittableRandom random;
     private final double baseScale;

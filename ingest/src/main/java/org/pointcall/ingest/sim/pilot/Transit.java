@@ -70,7 +70,8 @@ final class Transit {
             return false;
         }
         double bankCmd = plan.bankRad;
-        boolean near = Math.abs(s.hpM - hpCmd) < 150 * FT && Math.abs(s.tasMps - tasCmd) < 5 * KT;
+        boolean near = Math.abs(s.hpM - hpCmd) < 150 * FT && Math.abs(s.tasMps - tasCmd) < 5 * KT
+                && (Double.isNaN(headingRad) || Math.abs(SensedState.wrap(s.psiRad - headingRad)) < 10 * DEG);
         if (near && Double.isNaN(holdingSinceS)) {
             holdingSinceS = s.timeS;
             }
@@ -82,8 +83,10 @@ final class Transit {
         }
         boolean speedOk = plan.onMach ? Math.abs(s.mach - plan.mach) < tolMach
                 : Math.abs(s.casMps - plan.casMps) < tolCasMps;
-        // steady: on the numbers, not climbing, the g of the bank flown, no roll going on
-        boolean within = speedOk && Math.abs(s.hpM - hpCmd) < tolHpM && Math.abs(s.climbMps) < 1.0
+        // steady: on the numbers, neither climbing nor speeding up, the g of the bank flown, no roll going on
+        double vDotNow = s.alongMps2 - SensedState.G * Math.sin(s.gammaRad);
+        boolean within = speedOk && Math.abs(s.hpM - hpCmd) < tolHpM && Math.abs(s.climbMps) < 0.25
+                && Math.abs(vDotNow) < 0.03
                 && Math.abs(s.nz - 1.0 / Math.cos(s.phiRad)) < 0.05 && Math.abs(s.pRadS) < 3.0 * DEG
                 && Math.abs(SensedState.wrap(s.phiRad - (turning ? bankCmd : 0.0))) < (turning ? 1.5 : 3.0) * DEG
                 && (turning || Double.isNaN(headingRad) || Math.abs(SensedState.wrap(s.psiRad - headingRad))
@@ -112,7 +115,7 @@ final class Transit {
         double gamma = Math.asin(Loops.clamp(balance + vDotNow / SensedState.G, -0.35, 0.26));
         loops.pitchNz(s, Loops.clamp(loops.nzForGamma(s, gamma), 0.2, 2.5), dtS);
         loops.throttleEnergy(s, vDot, climb, dtS);
-        double bankCmd = Double.isNaN(heading) ? bank : loops.bankForHeading(s, heading, 30 * DEG);
+        double bankCmd = Double.isNaN(heading) ? bank : loops.bankForHeading(s, heading, 45 * DEG);
         loops.rollToBank(s, bankCmd, 15 * DEG, dtS);
         loops.yawBeta(s, 0.0, dtS);
     }
