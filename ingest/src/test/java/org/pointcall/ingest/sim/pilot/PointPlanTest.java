@@ -19,7 +19,7 @@ import org.pointcall.shared.units.Units;
 
 class PointPlanTest {
     private static final TestCard DEMO = DemoFiles.card();
-    private static final Envelope TERVIK = new Envelope(Airframes.load("tervik-jt4"));
+    private static final Envelope TERVIK = new Envelope(Airframes.load("veskarn-02"));
     private static final double MASS_KG = 5200.0;
     private static final double KT = Units.MPS_PER_KT;
     private static final double FT = Units.M_PER_FT;

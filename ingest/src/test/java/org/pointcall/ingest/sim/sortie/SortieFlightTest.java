@@ -43,7 +43,7 @@ import org.pointcall.shared.units.Units;
  * techniques; two whole demo sorties (clean and flawed) on the demo airframe.
  */
 class SortieFlightTest {
-    private static final String DEMO_AIRFRAME = "tervik-jt4";
+    private static final String DEMO_AIRFRAME = "veskarn-02";
     private static final TestCard DEMO = DemoFiles.card();
     private static final double KT = Units.MPS_PER_KT;
 
@@ -80,7 +80,7 @@ class SortieFlightTest {
 
     static Stream<Arguments> everyKindOnEveryAirframe() {
         List<Arguments> out = new ArrayList<>();
-        for (String a : List.of("tervik-jt4", "quillon-tp3", "sparrel-a1")) {
+        for (String a : List.of("veskarn-02", "quillon-tp3", "sparrel-a1")) {
             for (ManoeuvreKind k : ManoeuvreKind.values()) {
                 out.add(Arguments.of(a, k));
             }
