@@ -24,6 +24,7 @@ import picocli.CommandLine.Command;
             CheckCommand.class,
             ExamplesCommand.class,
             InspectCommand.class,
+            SimulateCommand.class,
             BenchCommand.class,
             CommandLine.HelpCommand.class
         })
