@@ -86,7 +86,7 @@ public final class SortieTelemetry {
         put(out, Quantity.RUDDER, Math.toRadians(rudDeg));
         // Forces: invented gains, N per (Pa deg); pull and right positive.
         put(out, Quantity.STICK_PITCH, -0.0022 * qbar * elevDeg);
-        put(out, Quantity.STICK_ROLL, 0.0012 * qbar * ailDeg);
+        put(out, Quantity.STICK_ROLL, 0.0005 * qbar * ailDeg);
         put(out, Quantity.PEDAL, 0.0060 * qbar * rudDeg);
         double power = m.powerLevel();
         put(out, Quantity.THROTTLE, m.throttleLever());

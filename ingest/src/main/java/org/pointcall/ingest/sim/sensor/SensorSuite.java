@@ -67,6 +67,9 @@ public final class SensorSuite {
         double span = p.validMax() - p.validMin();
         Dimension d = p.unit().dimension();
         String n = p.name();
+        if (p.unit() == org.pointcall.shared.units.Unit.NONE) {
+            return SensorSpec.CLEAN; // discretes (gear, flap selector) read exactly
+        }
         switch (d) {
             case PRESSURE:
                 // 0.05 hPa noise and 0.01 hPa LSB on a 0-1100 hPa channel; pneumatic line lag 50 ms.
@@ -161,6 +164,7 @@ public final class SensorSuite {
             if (s.quantum() > 0) {
                 v = Math.round(v / s.quantum()) * s.quantum();
             }
+            v = channel(dictionary.parameter(i), v);
             if (s.wildPerHour() > 0 && events.nextDouble() < s.wildPerHour() * periodNs[i] / 3.6e12) {
                 Parameter p = dictionary.parameter(i);
                 v = p.validMax() + (p.validMax() - p.validMin()) * (1 + events.nextDouble());
@@ -173,6 +177,21 @@ public final class SensorSuite {
             return false;
         }
         return true;
+    }
+
+    /**
+     * What the channel makes of a value: an angle whose range is one full turn wraps into it (heading 0 to 360,
+     * bank -180 to 180); anything else saturates at the ends of its range, as a transducer or an ADC does.
+     */
+    private static double channel(Parameter p, double v) {
+        double lo = p.validMin();
+        double hi = p.validMax();
+        if (p.unit().dimension() == Dimension.ANGLE && Math.abs(p.unit().toSi(hi) - p.unit().toSi(lo) - 2 * Math.PI) < 1e-9) {
+            double turn = hi - lo;
+            double w = (v - lo) % turn;
+            return (w < 0 ? w + turn : w) + lo;
+        }
+        return Math.max(lo, Math.min(hi, v));
     }
 
     private long nextDropoutGapNs() {
