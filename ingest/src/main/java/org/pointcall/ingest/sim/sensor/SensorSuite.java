@@ -144,6 +144,7 @@ public final class SensorSuite {
         }
         lastStampNs = stamp;
         out.timeNs(stamp);
+        int wildHere = 0;
         for (int i = 0; i < truth.length; i++) {
             if (!measured[i] || timeNs < nextSampleNs[i]) {
                 continue;
@@ -168,7 +169,7 @@ public final class SensorSuite {
             if (s.wildPerHour() > 0 && events.nextDouble() < s.wildPerHour() * periodNs[i] / 3.6e12) {
                 Parameter p = dictionary.parameter(i);
                 v = p.validMax() + (p.validMax() - p.validMin()) * (1 + events.nextDouble());
-                wildPoints++;
+                wildHere++;
             }
             out.value(i, v);
         }
@@ -176,6 +177,7 @@ public final class SensorSuite {
             framesDropped++;
             return false;
         }
+        wildPoints += wildHere; // only those that reach the link count: a dropped frame's are never seen
         return true;
     }
 
