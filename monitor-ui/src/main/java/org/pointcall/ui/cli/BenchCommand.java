@@ -22,7 +22,7 @@ import picocli.CommandLine.Model.CommandSpec;
         header = "Speed benchmarks of the ingest stage.",
         mixinStandardHelpOptions = true,
         description = "Speed benchmarks; each prints its figures and ratios as 'name: value unit'.",
-        subcommands = {BenchCommand.Ingest.class, BenchCommand.Udp.class, BenchCommand.Kafka.class})
+        subcommands = {BenchCommand.Ingest.class, BenchCommand.Udp.class, BenchCommand.Kafka.class, BenchCommand.Sim.class})
 public final class BenchCommand implements Runnable {
     @Spec
     CommandSpec spec;
@@ -107,6 +107,43 @@ public final class BenchCommand implements Runnable {
                     java.nio.charset.StandardCharsets.UTF_8);
             KafkaBench.run(o, ps);
             ps.flush();
+        }
+    }
+
+    @Command(name = "sim", mixinStandardHelpOptions = true, header = "Simulator speed: a whole demo sortie, physics included.",
+            description = {"Flies the demo card on the demo airframe (physics at 500 Hz, sensors, telemetry frames at",
+                "the given rate) into a sink that keeps nothing, and reports sortie time over wall and CPU time."})
+    static final class Sim implements Runnable {
+        @Option(names = "--rate", defaultValue = "100", description = "frame rate, Hz (default: ${DEFAULT-VALUE})")
+        double rateHz;
+        @Option(names = "--seed", defaultValue = "1", description = "seed (default: ${DEFAULT-VALUE})")
+        long seed;
+        @Spec
+        CommandSpec spec;
+
+        @Override
+        public void run() {
+            PrintWriter out = spec.commandLine().getOut();
+            org.pointcall.ingest.sim.SortieSimulator sim = new org.pointcall.ingest.sim.SortieSimulator(
+                    org.pointcall.ingest.sim.airframe.Airframes.load("veskarn-02"),
+                    org.pointcall.shared.demo.DemoFiles.card(), org.pointcall.shared.demo.DemoFiles.dictionary(), seed,
+                    rateHz, org.pointcall.ingest.sim.sensor.SensorSettings.DEFAULT,
+                    org.pointcall.ingest.sim.pilot.PilotSettings.DEFAULT);
+            long[] frames = new long[1];
+            java.lang.management.ThreadMXBean mx = java.lang.management.ManagementFactory.getThreadMXBean();
+            long cpu0 = mx.getCurrentThreadCpuTime();
+            long t0 = System.nanoTime();
+            org.pointcall.ingest.sim.truth.SortieTruth t = sim.run(java.util.List.of(f -> frames[0]++));
+            long wall = System.nanoTime() - t0;
+            long cpu = mx.getCurrentThreadCpuTime() - cpu0;
+            out.println("sortie: " + t.sortie() + " on " + t.airframe() + ", " + t.points().size() + " points");
+            out.println(String.format(java.util.Locale.ROOT, "flight: %.1f s", t.durationS()));
+            out.println(String.format(java.util.Locale.ROOT, "frames: %d at %.0f Hz", frames[0], rateHz));
+            out.println(String.format(java.util.Locale.ROOT, "wall: %.2f s", wall / 1e9));
+            out.println(String.format(java.util.Locale.ROOT, "sim.speed: %.1f x real time (wall)", t.durationS() / (wall / 1e9)));
+            out.println(String.format(java.util.Locale.ROOT, "sim.speed.cpu: %.1f x real time (one core, thread CPU time)",
+                    t.durationS() / (cpu / 1e9)));
+            out.flush();
         }
     }
 
