@@ -44,11 +44,11 @@ import org.pointcall.shared.error.Problem;
  *
  * <p>Smile's models can only be saved by Java serialisation, which runs code of every class a stream names. So
  * loading checks everything else first (magic, version, metadata, lengths, the payload's SHA-256 against the one in
- * the metadata) and then deserialises through an allow-list ({@code smile.*}, basic {@code java.lang} and
- * {@code java.util} types, primitive arrays; limits on depth, object count and array length): a file naming any
- * other class is refused before any object of that class exists. The hash detects corruption, not tampering (anyone
- * can recompute it); the allow-list is what keeps a crafted file from running code. Writing checks the same way,
- * so a file that is written can be read.
+ * the metadata) and then deserialises through an allow-list ({@code smile.*}, our classifiers in
+ * {@code org.pointcall.models.train}, basic {@code java.lang} and {@code java.util} types, primitive arrays; limits
+ * on depth, object count and array length): a file naming any other class is refused before any object of that
+ * class exists. The hash detects corruption, not tampering (anyone can recompute it); the allow-list is what keeps a
+ * crafted file from running code. Writing checks the same way, so a file that is written can be read.
  *
  * <p>Every refusal is one {@link InputRejectedException} naming the file. Stateless; safe from any thread.
  */

@@ -5,11 +5,12 @@ import java.util.Set;
 
 /**
  * The allow-list a model payload is deserialised through. Java deserialisation runs code of every class a stream
- * names, so a file from an untrusted place could otherwise run code: only Smile's own classes, a few basic value
- * and collection types of {@code java.lang} and {@code java.util}, primitives and arrays of allowed types pass,
- * within limits on nesting depth, object count, array length and stream length. Everything else is rejected when
- * its class descriptor is read, before any instance of it exists and before the class is initialised. One filter
- * per stream; it remembers why it rejected.
+ * names, so a file from an untrusted place could otherwise run code: only Smile's own classes, pointcall's
+ * classifier wrappers ({@code org.pointcall.models.train.*}), a few basic value and collection types of
+ * {@code java.lang} and {@code java.util}, primitives and arrays of allowed types pass, within limits on nesting
+ * depth, object count, array length and stream length. Everything else is rejected when its class descriptor is
+ * read, before any instance of it exists and before the class is initialised. One filter per stream; it remembers
+ * why it rejected.
  */
 final class PayloadFilter implements ObjectInputFilter {
     /**
@@ -38,8 +39,8 @@ final class PayloadFilter implements ObjectInputFilter {
             "java.util.Collections$UnmodifiableMap");
 
     /** What the allow-list admits, in words, for messages. */
-    static final String ALLOWED = "Smile's classes (smile.*), basic java.lang and java.util value and collection "
-            + "types, primitives and arrays of these";
+    static final String ALLOWED = "Smile's classes (smile.*), pointcall's classifiers (org.pointcall.models.train.*), "
+            + "basic java.lang and java.util value and collection types, primitives and arrays of these";
 
     private final long maxStreamBytes;
     private String rejection;
@@ -57,9 +58,15 @@ final class PayloadFilter implements ObjectInputFilter {
         return e.isPrimitive() || allowedName(e.getName());
     }
 
+    /**
+     * Our own classifier wrappers: they hold only Smile models, primitive arrays and strings, and none of them runs
+     * code when read.
+     */
+    static final String OWN_CLASSES = "org.pointcall.models.train.";
+
     /** Whether a (non-array) class name is on the allow-list. */
     static boolean allowedName(String name) {
-        return name.startsWith("smile.") || BASICS.contains(name);
+        return name.startsWith("smile.") || name.startsWith(OWN_CLASSES) || BASICS.contains(name);
     }
 
     @Override

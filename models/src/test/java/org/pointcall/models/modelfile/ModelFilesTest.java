@@ -125,8 +125,9 @@ class ModelFilesTest {
         TestModels.EVIL_RAN.set(false);
         InputRejectedException e = assertThrows(InputRejectedException.class, () -> ModelFiles.load(crafted));
         assertEquals(crafted + ": the payload holds class org.pointcall.models.modelfile.TestModels$EvilMap, which "
-                + "a model file may not hold (allowed: Smile's classes (smile.*), basic java.lang and java.util value"
-                + " and collection types, primitives and arrays of these); refused, nothing loaded", e.getMessage());
+                + "a model file may not hold (allowed: Smile's classes (smile.*), pointcall's classifiers "
+                + "(org.pointcall.models.train.*), basic java.lang and java.util value and collection types, "
+                + "primitives and arrays of these); refused, nothing loaded", e.getMessage());
         assertFalse(TestModels.EVIL_RAN.get(), "the disallowed class's readObject never ran");
         // the metadata alone can still be shown, without deserialising anything
         assertEquals("smile.classification.RandomForest", ModelFiles.readMetadata(crafted).payloadClass());
