@@ -12,7 +12,6 @@ import org.pointcall.ingest.sim.model.FlightModel;
 import org.pointcall.ingest.sim.model.TrimPoint;
 import org.pointcall.shared.card.TestCard;
 import org.pointcall.shared.card.TestPoint;
-import org.pointcall.shared.kind.ManoeuvreKind;
 
 /**
  * The simulated test pilot flying one card: the points in card order, each preceded by a transit to its entry
@@ -58,6 +57,8 @@ public final class CardPilot {
     private int flapFlown;
     private double transitHeading;
     private Airframe flown;
+    private String transitLabel;
+    private PointPlan transitLabelFor;
 
     /**
      * @param airframe the airframe flown (clean configuration)
@@ -139,7 +140,7 @@ public final class CardPilot {
         if (index >= card.points().size()) {
             plan = null;
             transit = null;
-            finalLegEndS = state.timeS + 10.0;
+            finalLegEndS = state.timeS + 5.0;
             finalHpM = state.hpM;
             finalPsi = state.psiRad;
             gear = 0;
@@ -263,16 +264,21 @@ public final class CardPilot {
         }
     }
 
-    /** What the pilot is doing: {@code transit to <id>}, the id of the point being flown, or {@code done}. */
+    /**
+     * What the pilot is doing: {@code transit to <id>}, the id of the point being flown, {@code closing leg} or
+     * {@code done}. The same string object until the activity changes.
+     */
     public String activity() {
-        if (plan == null) {
-            return finished ? "done" : "closing leg";
+        String now = plan == null ? (finished ? "done" : "closing leg")
+                : technique == null ? null : plan.point.id();
+        if (now == null) {
+            if (transitLabelFor != plan) {
+                transitLabel = "transit to " + plan.point.id();
+                transitLabelFor = plan;
+            }
+            return transitLabel;
         }
-        return technique == null ? "transit to " + plan.point.id() : plan.point.id();
+        return now;
     }
 
-    /** The kind being flown, or null in transit. */
-    public ManoeuvreKind kindFlown() {
-        return technique == null || plan == null ? null : plan.kind;
-    }
 }
