@@ -90,7 +90,8 @@ public final class CardPilot {
             f.add(settings.forcedFlaws().getOrDefault(p.id(), drawn));
         }
         this.flaws = List.copyOf(f);
-        // a climb the aircraft can keep up in a transit: a third of its thrust-to-weight, as a climb gradient
+        // the climb rate a transit asks for scales with thrust-to-weight (some 20 m/s for the jet trainer); the
+        // energy control gives way to the speed when the engine cannot keep it up
         double tw = airframe.engine().maxThrustSeaLevelN() / (airframe.mass().fullMassKg() * SensedState.G);
         this.climbMaxMps = Loops.clamp(60.0 * tw, 4.0, 25.0);
     }
