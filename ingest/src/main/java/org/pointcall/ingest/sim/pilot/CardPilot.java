@@ -12,7 +12,6 @@ import org.pointcall.ingest.sim.model.FlightModel;
 import org.pointcall.ingest.sim.model.TrimPoint;
 import org.pointcall.shared.card.TestCard;
 import org.pointcall.shared.card.TestPoint;
-import org.pointcall.shared.kind.ManoeuvreKind;
 
 /**
  * The simulated test pilot flying one card: the points in card order, each preceded by a transit to its entry
@@ -58,6 +57,8 @@ public final class CardPilot {
     private int flapFlown;
     private double transitHeading;
     private Airframe flown;
+    private String transitLabel;
+    private PointPlan transitLabelFor;
 
     /**
      * @param airframe the airframe flown (clean configuration)
@@ -89,7 +90,8 @@ public final class CardPilot {
             f.add(settings.forcedFlaws().getOrDefault(p.id(), drawn));
         }
         this.flaws = List.copyOf(f);
-        // a climb the aircraft can keep up in a transit: a third of its thrust-to-weight, as a climb gradient
+        // the climb rate a transit asks for scales with thrust-to-weight (some 20 m/s for the jet trainer); the
+        // energy control gives way to the speed when the engine cannot keep it up
         double tw = airframe.engine().maxThrustSeaLevelN() / (airframe.mass().fullMassKg() * SensedState.G);
         this.climbMaxMps = Loops.clamp(60.0 * tw, 4.0, 25.0);
     }
@@ -139,7 +141,7 @@ public final class CardPilot {
         if (index >= card.points().size()) {
             plan = null;
             transit = null;
-            finalLegEndS = state.timeS + 10.0;
+            finalLegEndS = state.timeS + 5.0;
             finalHpM = state.hpM;
             finalPsi = state.psiRad;
             gear = 0;
@@ -263,16 +265,21 @@ public final class CardPilot {
         }
     }
 
-    /** What the pilot is doing: {@code transit to <id>}, the id of the point being flown, or {@code done}. */
+    /**
+     * What the pilot is doing: {@code transit to <id>}, the id of the point being flown, {@code closing leg} or
+     * {@code done}. The same string object until the activity changes.
+     */
     public String activity() {
-        if (plan == null) {
-            return finished ? "done" : "closing leg";
+        String now = plan == null ? (finished ? "done" : "closing leg")
+                : technique == null ? null : plan.point.id();
+        if (now == null) {
+            if (transitLabelFor != plan) {
+                transitLabel = "transit to " + plan.point.id();
+                transitLabelFor = plan;
+            }
+            return transitLabel;
         }
-        return technique == null ? "transit to " + plan.point.id() : plan.point.id();
+        return now;
     }
 
-    /** The kind being flown, or null in transit. */
-    public ManoeuvreKind kindFlown() {
-        return technique == null || plan == null ? null : plan.kind;
-    }
 }

@@ -12,7 +12,8 @@ import java.util.Objects;
  * @param trackingErrorScale multiplies the pilot's seeded tracking error (command noise and slow drifts); 0 flies
  *                           with the controllers' own precision, 1 is the usual pilot
  * @param forcedFlaws        flaw to give a point whatever the draw, by card point id ({@link Flaw#NONE} forces a
- *                           clean point); copied
+ *                           clean point); copied. A forced flaw is applied as given, even one that changes nothing
+ *                           in that kind's technique (the truth names it all the same)
  */
 public record PilotSettings(double flawProbability, double trackingErrorScale, Map<String, Flaw> forcedFlaws) {
     /** The usual pilot: 15 % of points flawed (a figure chosen for the demo), usual tracking error. */

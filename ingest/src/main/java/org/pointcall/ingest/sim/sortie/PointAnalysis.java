@@ -262,18 +262,34 @@ final class PointAnalysis {
 
     /** Heading slope with the heading unwrapped from the first sample (a hold across north stays smooth). */
     private static double headingRate(Trajectory tr, int i0, int i1) {
-        Trajectory t = new Trajectory();
+        int n = i1 - i0 + 1;
+        if (n < 2) {
+            return Double.NaN;
+        }
+        double mt = 0.0;
+        double mh = 0.0;
         double h = tr.get(HEADING, i0);
-        double[] row = new double[Trajectory.CHANNELS];
         for (int i = i0; i <= i1; i++) {
             if (i > i0) {
                 h += wrap(tr.get(HEADING, i) - tr.get(HEADING, i - 1));
             }
-            row[Trajectory.TIME] = tr.time(i);
-            row[HEADING] = h;
-            t.add(row);
+            mt += tr.time(i);
+            mh += h;
         }
-        return Fits.rate(t, HEADING, 0, t.size() - 1);
+        mt /= n;
+        mh /= n;
+        double stt = 0.0;
+        double sth = 0.0;
+        h = tr.get(HEADING, i0);
+        for (int i = i0; i <= i1; i++) {
+            if (i > i0) {
+                h += wrap(tr.get(HEADING, i) - tr.get(HEADING, i - 1));
+            }
+            double dt = tr.time(i) - mt;
+            stt += dt * dt;
+            sth += dt * (h - mh);
+        }
+        return stt > 0.0 ? sth / stt : Double.NaN;
     }
 
     /** First instant after {@code i0} the climb rate is back to zero or above after a descent (else the lowest). */

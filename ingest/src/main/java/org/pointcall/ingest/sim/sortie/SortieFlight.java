@@ -124,7 +124,8 @@ public final class SortieFlight {
             TrimPoint start = pilot.initialTrim(model);
             model.initialise(start, 0.0, 0.0, 0.0);
             stepS = model.stepS();
-            double stepRate = 1.0 / stepS;
+            // times as step / rate: correctly rounded, so that 40.87 s is written 40.87
+            double stepRate = simulation.stepRateHz();
             long controlEvery = Math.max(1L, Math.round(stepRate / CONTROL_RATE_HZ));
             pilot.start(model, 0.0);
             config.activity(pilot.activity());
@@ -133,7 +134,7 @@ public final class SortieFlight {
             long maxSteps = (long) (MAX_SORTIE_S / stepS);
             double framesPerStep = frameRateHz / stepRate;
             while (true) {
-                double t = step * stepS;
+                double t = step / stepRate;
                 if (step % controlEvery == 0) {
                     configure(t);
                     pilot.tick(model, t);
@@ -155,7 +156,7 @@ public final class SortieFlight {
                             + MAX_SORTIE_S + " s (pilot: " + pilot.activity() + ")");
                 }
             }
-            double duration = step * stepS;
+            double duration = step / stepRate;
             return new SortieTruth(SortieTruth.FORMAT, airframe.name(), card.sortie(), seed, frameRateHz, duration,
                     false, 0, 0, 0, points);
         }

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.stream.Stream;
@@ -12,6 +13,7 @@ import java.util.stream.Stream;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.EigenDecomposition;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
@@ -346,7 +348,7 @@ class SortieFlightTest {
     }
 
     @Test
-    void sameSeedGivesTheSameTruthAndTheSameFrames() {
+    void sameSeedGivesTheSameTruthAndTheSameFrames(@TempDir Path dir) {
         TestCard card = new TestCard(DEMO.sortie(), DEMO.airframe(), "", "", DEMO.limits(),
                 List.of(DEMO.point("AR-1").orElseThrow(), DEMO.point("TP-1").orElseThrow()));
         Airframe a = Airframes.load(DEMO_AIRFRAME);
@@ -358,6 +360,8 @@ class SortieFlightTest {
         SortieTruth t3 = new SortieFlight(a, card, 100L, PilotSettings.DEFAULT).fly(64.0, h3);
         assertEquals(t1, t2);
         assertEquals(t1.toJson(), t2.toJson());
+        t1.write(dir.resolve("truth.json"));
+        assertEquals(t1, SortieTruth.read(dir.resolve("truth.json")));
         assertEquals(h1.hash, h2.hash);
         assertEquals(h1.frames, h2.frames);
         assertNotEquals(h1.hash, h3.hash);
