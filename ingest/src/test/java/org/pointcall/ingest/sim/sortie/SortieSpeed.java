@@ -21,7 +21,7 @@ public final class SortieSpeed {
     public static void main(String[] args) {
         int warm = args.length > 0 ? Integer.parseInt(args[0]) : 1;
         int runs = args.length > 1 ? Integer.parseInt(args[1]) : 3;
-        Airframe a = Airframes.load("tervik-jt4");
+        Airframe a = Airframes.load("veskarn-02");
         TestCard card = DemoFiles.card();
         for (int i = 0; i < warm + runs; i++) {
             long t0 = System.nanoTime();
