@@ -1,6 +1,7 @@
 package org.pointcall.shared.airdata;
 
 import org.pointcall.shared.error.Plain;
+import org.pointcall.shared.table.LinearTable;
 import java.util.Arrays;
 
 /**
@@ -102,23 +103,7 @@ public interface PositionErrorCorrection {
 
         @Override
         public double deltaPpOverQc(double m) {
-            if (Double.isNaN(m)) {
-                return Double.NaN;
-            }
-            int last = mach.length - 1;
-            if (m <= mach[0]) {
-                return deltaPpOverQc[0];
-            }
-            if (m >= mach[last]) {
-                return deltaPpOverQc[last];
-            }
-            // calibration tables are short (tens of points), so a scan is enough
-            int i = 1;
-            while (mach[i] < m) {
-                i++;
-            }
-            double f = (m - mach[i - 1]) / (mach[i] - mach[i - 1]);
-            return deltaPpOverQc[i - 1] + f * (deltaPpOverQc[i] - deltaPpOverQc[i - 1]);
+            return LinearTable.at(mach, deltaPpOverQc, m, LinearTable.Ends.FLAT);
         }
 
         @Override

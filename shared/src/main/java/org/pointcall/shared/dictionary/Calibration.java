@@ -2,6 +2,8 @@ package org.pointcall.shared.dictionary;
 
 import java.util.Arrays;
 
+import org.pointcall.shared.table.LinearTable;
+
 /** Raw-to-engineering-unit conversion of one parameter, applied once as a value enters the pipeline. */
 public sealed interface Calibration permits Calibration.Identity, Calibration.Polynomial, Calibration.Breakpoints {
 
@@ -116,27 +118,7 @@ public sealed interface Calibration permits Calibration.Identity, Calibration.Po
 
         @Override
         public double toEngineering(double x) {
-            int n = raw.length;
-            int hi;
-            if (x <= raw[0]) {
-                hi = 1;
-            } else if (x >= raw[n - 1]) {
-                hi = n - 1;
-            } else {
-                int lo = 0;
-                hi = n - 1;
-                while (hi - lo > 1) {
-                    int mid = (lo + hi) >>> 1;
-                    if (raw[mid] <= x) {
-                        lo = mid;
-                    } else {
-                        hi = mid;
-                    }
-                }
-            }
-            int lo = hi - 1;
-            double f = (x - raw[lo]) / (raw[hi] - raw[lo]);
-            return eu[lo] + f * (eu[hi] - eu[lo]);
+            return LinearTable.at(raw, eu, x, LinearTable.Ends.EXTEND);
         }
 
         /** Inverse of the piecewise-linear table when its EU values are strictly monotonic, else NaN. */

@@ -1,7 +1,9 @@
 package org.pointcall.ingest.sim.airframe;
 
 import java.util.Arrays;
+
 import org.pointcall.shared.error.Plain;
+import org.pointcall.shared.table.LinearTable;
 
 /**
  * A one-dimensional table, linear between breakpoints and held flat beyond the first and last (a profile says
@@ -44,25 +46,9 @@ public record Curve(double[] x, double[] y) {
         return y.clone();
     }
 
-    /** Value at {@code v}; allocation-free. */
+    /** Value at {@code v}, held flat beyond the ends; allocation-free. */
     public double valueAt(double v) {
-        int last = x.length - 1;
-        if (v <= x[0]) {
-            return y[0];
-        }
-        if (v >= x[last]) {
-            return y[last];
-        }
-        if (Double.isNaN(v)) {
-            return Double.NaN;
-        }
-        // profile tables are short, so a scan beats a search
-        int i = 1;
-        while (x[i] < v) {
-            i++;
-        }
-        double f = (v - x[i - 1]) / (x[i] - x[i - 1]);
-        return y[i - 1] + f * (y[i] - y[i - 1]);
+        return LinearTable.at(x, y, v, LinearTable.Ends.FLAT);
     }
 
     /** Smallest and largest breakpoint. */
