@@ -99,15 +99,19 @@ public final class Evaluation {
                 w = Math.max(w, Long.toString(rows.count(c, p)).length() + 1);
             }
         }
+        String corner = "truth \\ predicted";
+        int first = corner.length() + 1;
+        for (int c : shown) {
+            first = Math.max(first, rows.classNames().get(c).length() + 1);
+        }
         List<String> out = new ArrayList<>();
-        StringBuilder head = new StringBuilder(String.format(Locale.ROOT, "%-" + w + "s", "truth \\ predicted"
-                .substring(0, Math.min(w - 1, 17))));
+        StringBuilder head = new StringBuilder(String.format(Locale.ROOT, "%-" + first + "s", corner));
         for (int p : shown) {
             head.append(String.format(Locale.ROOT, "%" + w + "s", rows.classNames().get(p)));
         }
         out.add(head.toString());
         for (int t : shown) {
-            StringBuilder line = new StringBuilder(String.format(Locale.ROOT, "%-" + w + "s",
+            StringBuilder line = new StringBuilder(String.format(Locale.ROOT, "%-" + first + "s",
                     rows.classNames().get(t)));
             for (int p : shown) {
                 line.append(String.format(Locale.ROOT, "%" + w + "d", rows.count(t, p)));
