@@ -12,6 +12,8 @@ import java.util.Map;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.pointcall.ingest.sim.truth.PointTruth;
+import org.pointcall.ingest.sim.truth.SortieTruth;
 import org.pointcall.models.modelfile.ModelFiles;
 
 /** sortie-set, train and evaluate end to end on a tiny set of short sorties. */
@@ -109,6 +111,31 @@ class TrainEvaluateCommandTest {
     }
 
     @Test
+    void aRecordingWithItsLabelFileScoresAsItsSortieFolder() throws Exception {
+        assertEquals(0, train.exitCode(), train.err());
+        Path sortie = dir.resolve("set/sparrel-a1-02");
+        StringBuilder labels = new StringBuilder("kind,begin,end,card_id\n");
+        for (PointTruth p : SortieTruth.read(sortie.resolve("truth.json")).points()) {
+            labels.append(p.kind()).append(',').append(p.beginS()).append(',').append(p.endS()).append(',')
+                    .append(p.cardId()).append('\n');
+        }
+        Path labelFile = dir.resolve("labels.csv");
+        Files.writeString(labelFile, labels, StandardCharsets.UTF_8);
+        String model = dir.resolve("model/m.pcm").toString();
+        CommandRun byFolder = CommandRun.of("evaluate", "--model", model, "--data", sortie.toString());
+        CommandRun byFile = CommandRun.of("evaluate", "--model", model, "--recording",
+                sortie.resolve("sortie.csv").toString(), "--labels", labelFile.toString(), "--dictionary",
+                sortie.resolve("dictionary.yaml").toString());
+        assertEquals(0, byFile.exitCode(), byFile.err());
+        Map<String, String> a = byFolder.figures();
+        Map<String, String> b = byFile.figures();
+        // a wall-clock figure, different on every run
+        a.remove("cost.classifier-ns-per-tick");
+        b.remove("cost.classifier-ns-per-tick");
+        assertEquals(a, b);
+    }
+
+    @Test
     void badInputIsOneLineAndExitTwo() throws Exception {
         Path missing = dir.resolve("nowhere");
         CommandRun a = CommandRun.of("evaluate", "--model", dir.resolve("model/m.pcm").toString(), "--data",
@@ -138,6 +165,11 @@ class TrainEvaluateCommandTest {
         assertEquals(1, d.err().strip().lines().count(), d.err());
         assertTrue(d.err().startsWith("pointcall evaluate: " + sortie + ": "), d.err());
         assertTrue(d.err().contains("Roll"), d.err());
+
+        CommandRun e = CommandRun.of("evaluate", "--model", dir.resolve("model/m.pcm").toString(), "--recording",
+                sortie.resolve("sortie.csv").toString());
+        assertEquals(2, e.exitCode());
+        assertEquals("pointcall evaluate: --recording and --labels go together", e.err().strip());
     }
 
     /** The dictionary text with one parameter's block (from its "- name:" line to the next) left out. */
