@@ -25,6 +25,9 @@ import picocli.CommandLine.Command;
             ExamplesCommand.class,
             InspectCommand.class,
             SimulateCommand.class,
+            SortieSetCommand.class,
+            TrainCommand.class,
+            EvaluateCommand.class,
             BenchCommand.class,
             CommandLine.HelpCommand.class
         })
