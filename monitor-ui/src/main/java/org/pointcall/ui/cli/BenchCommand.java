@@ -19,7 +19,7 @@ import picocli.CommandLine.Model.CommandSpec;
  * run against a baseline measured in the same run, and reported as ratios; nothing here is a pass/fail test.
  */
 @Command(name = "bench",
-        header = "Speed benchmarks of the ingest stage.",
+        header = "Speed benchmarks: ingest, UDP, Kafka, simulator.",
         mixinStandardHelpOptions = true,
         description = "Speed benchmarks; each prints its figures and ratios as 'name: value unit'.",
         subcommands = {BenchCommand.Ingest.class, BenchCommand.Udp.class, BenchCommand.Kafka.class, BenchCommand.Sim.class})
