@@ -31,4 +31,25 @@ public enum TimeForm {
     public boolean compatibleWith(TimeForm other) {
         return scale == other.scale;
     }
+
+    /**
+     * A time in this form, for messages: seconds with three to nine decimals ({@code 12.300 s}), or
+     * {@code HH:MM:SS.sss} / {@code DDD:HH:MM:SS.sss} with digits below the millisecond only when present.
+     */
+    public String format(long timeNs) {
+        if (this == SECONDS) {
+            return TimeText.seconds(timeNs) + " s";
+        }
+        long t = Math.floorMod(timeNs, this == DAY_OF_YEAR_TIME ? 366 * TimeText.NS_PER_DAY : TimeText.NS_PER_DAY);
+        long day = t / TimeText.NS_PER_DAY;
+        t -= day * TimeText.NS_PER_DAY;
+        long ms = t / 1_000_000L;
+        long subMs = t % 1_000_000L;
+        String hms = String.format(java.util.Locale.ROOT, "%02d:%02d:%02d.%03d", ms / 3_600_000L,
+                ms / 60_000L % 60, ms / 1000 % 60, ms % 1000);
+        if (subMs != 0) {
+            hms += String.format(java.util.Locale.ROOT, "%06d", subMs).replaceAll("0+$", "");
+        }
+        return this == DAY_OF_YEAR_TIME ? String.format(java.util.Locale.ROOT, "%03d:", day + 1) + hms : hms;
+    }
 }

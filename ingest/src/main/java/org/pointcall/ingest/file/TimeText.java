@@ -132,20 +132,7 @@ final class TimeText {
 
     /** Formats nanoseconds in the file's own form, for messages. */
     static String format(long timeNs, TimeForm form) {
-        if (form == TimeForm.SECONDS) {
-            return seconds(timeNs) + " s";
-        }
-        long t = Math.floorMod(timeNs, form == TimeForm.DAY_OF_YEAR_TIME ? 366 * NS_PER_DAY : NS_PER_DAY);
-        long day = t / NS_PER_DAY;
-        t -= day * NS_PER_DAY;
-        long ms = t / 1_000_000L;
-        long subMs = t % 1_000_000L;
-        String hms = String.format(java.util.Locale.ROOT, "%02d:%02d:%02d.%03d", ms / 3_600_000L,
-                ms / 60_000L % 60, ms / 1000 % 60, ms % 1000);
-        if (subMs != 0) {
-            hms += String.format(java.util.Locale.ROOT, "%06d", subMs).replaceAll("0+$", "");
-        }
-        return form == TimeForm.DAY_OF_YEAR_TIME ? String.format(java.util.Locale.ROOT, "%03d:", day + 1) + hms : hms;
+        return form.format(timeNs);
     }
 
     /** Seconds with at least three decimals and as many as needed, up to nine. */

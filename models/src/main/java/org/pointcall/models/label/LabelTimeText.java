@@ -2,7 +2,6 @@ package org.pointcall.models.label;
 
 import java.math.BigDecimal;
 import java.math.RoundingMode;
-import java.util.Locale;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
@@ -78,18 +77,8 @@ final class LabelTimeText {
         return seconds.movePointRight(9).setScale(0, RoundingMode.HALF_UP).longValueExact();
     }
 
-    /** Prints {@code timeNs} in {@code form}, for messages (seconds with at least three decimals). */
+    /** Prints {@code timeNs} in {@code form}, for messages, as the recorded-file reader does. */
     static String format(long timeNs, TimeForm form) {
-        if (form == TimeForm.SECONDS) {
-            BigDecimal s = BigDecimal.valueOf(timeNs, 9).stripTrailingZeros();
-            return (s.scale() < 3 ? s.setScale(3) : s).toPlainString() + " s";
-        }
-        long t = Math.floorMod(timeNs, form == TimeForm.DAY_OF_YEAR_TIME ? 366 * NS_PER_DAY : NS_PER_DAY);
-        long day = t / NS_PER_DAY;
-        t -= day * NS_PER_DAY;
-        long ms = t / 1_000_000L;
-        String hms = String.format(Locale.ROOT, "%02d:%02d:%02d.%03d", ms / 3_600_000L, ms / 60_000L % 60,
-                ms / 1000 % 60, ms % 1000);
-        return form == TimeForm.DAY_OF_YEAR_TIME ? String.format(Locale.ROOT, "%03d:", day + 1) + hms : hms;
+        return form.format(timeNs);
     }
 }
