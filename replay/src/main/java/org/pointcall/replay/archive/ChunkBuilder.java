@@ -58,6 +58,10 @@ public final class ChunkBuilder {
         return firstTimeNs;
     }
 
+    public long lastTimeNs() {
+        return lastTimeNs;
+    }
+
     /** Whether a record with this body and tag fits now (an empty chunk takes any allowed record). */
     public boolean fits(int tagBytes, int bodyBytes) {
         return payload.remaining() >= RECORD_HEADER_BYTES + tagBytes + bodyBytes;

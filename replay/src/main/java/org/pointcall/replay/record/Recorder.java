@@ -51,6 +51,7 @@ public final class Recorder implements DatagramHandler, AutoCloseable {
             Locale.ROOT).withZone(ZoneOffset.UTC);
 
     private final Path file;
+    private final long startClockNs;
     private final RecorderPolicy policy;
     private final LongSupplier clock;
     private final RecorderListener listener;
@@ -90,8 +91,9 @@ public final class Recorder implements DatagramHandler, AutoCloseable {
     private long lastMemoryAlarmNs = Long.MIN_VALUE;
 
     private Recorder(Path file, RecorderPolicy policy, LongSupplier clock, RecorderListener listener,
-                     ArchiveWriter writer) {
+                     ArchiveWriter writer, long startClockNs) {
         this.file = file;
+        this.startClockNs = startClockNs;
         this.policy = policy;
         this.clock = clock;
         this.listener = listener;
@@ -110,19 +112,21 @@ public final class Recorder implements DatagramHandler, AutoCloseable {
      */
     public static Recorder start(Path file, RecorderPolicy policy, LongSupplier clockNs, RecorderListener listener) {
         ArchiveWriter w;
+        long start;
         try {
             Path parent = file.toAbsolutePath().getParent();
             if (parent != null) {
                 Files.createDirectories(parent);
             }
-            w = ArchiveWriter.create(file, System.currentTimeMillis(), clockNs.getAsLong());
+            start = clockNs.getAsLong();
+            w = ArchiveWriter.create(file, System.currentTimeMillis(), start);
         } catch (java.nio.file.FileAlreadyExistsException e) {
             throw new PointcallException(file + ": an archive of that name exists already; archives are never "
                     + "overwritten");
         } catch (IOException e) {
             throw new PointcallException(file + ": cannot create the sortie archive: " + e.getMessage(), e);
         }
-        Recorder r = new Recorder(file, policy, clockNs, listener, w);
+        Recorder r = new Recorder(file, policy, clockNs, listener, w, start);
         r.thread.start();
         return r;
     }
@@ -352,15 +356,16 @@ public final class Recorder implements DatagramHandler, AutoCloseable {
     private void seal() {
         int packets = chunk.packets();
         long t0 = chunk.firstTimeNs();
+        long t1 = chunk.lastTimeNs();
         byte[] bytes = chunk.seal(nextChunk++);
-        held.addLast(new Sealed(bytes, packets, t0));
+        held.addLast(new Sealed(bytes, packets, t0, t1));
         heldBytes += bytes.length;
         while (heldBytes > policy.memoryLimitBytes() && held.size() > 1) {
             Sealed gone = held.pollFirst();
             heldBytes -= gone.bytes.length;
             lostDiskFull += gone.packets;
             lostFirstNs = Math.min(lostFirstNs, gone.firstTimeNs);
-            lostLastNs = Math.max(lostLastNs, gone.firstTimeNs);
+            lostLastNs = Math.max(lostLastNs, gone.lastTimeNs);
             if (now - lastMemoryAlarmNs >= ALARM_REPEAT_NS || lastMemoryAlarmNs == Long.MIN_VALUE) {
                 lastMemoryAlarmNs = now;
                 alarm(AlarmKind.MEMORY_FULL, "recorder memory for " + file + " is full ("
@@ -400,14 +405,14 @@ public final class Recorder implements DatagramHandler, AutoCloseable {
         if (failing) {
             failing = false;
             long lost = lostDiskFull - lostAtFailureStart;
-            String span = lost == 0 ? "" : String.format(Locale.ROOT, " (chunks starting %.3f s to %.3f s after the "
-                    + "failure began)", (lostFirstNs - failingSinceNs) / 1e9, (lostLastNs - failingSinceNs) / 1e9);
+            String span = lost == 0 ? "" : String.format(Locale.ROOT, " (those that arrived %.3f s to %.3f s into "
+                    + "the recording)", (lostFirstNs - startClockNs) / 1e9, (lostLastNs - startClockNs) / 1e9);
             alarm(AlarmKind.WRITING_AGAIN, "writing " + file + " again after "
                     + String.format(Locale.ROOT, "%.1f s", (now - failingSinceNs) / 1e9) + "; the data held in memory"
                     + " is on disk; " + (lost == 0 ? "nothing was lost" : lost + " packets were lost" + span));
             if (!stopping) {
                 String json = "{\"failedAtNs\":" + failingSinceNs + ",\"resumedAtNs\":" + now + ",\"packetsLost\":"
-                        + lost + "}";
+                        + lost + (lost == 0 ? "" : ",\"lostFromNs\":" + lostFirstNs + ",\"lostToNs\":" + lostLastNs) + "}";
                 enqueue(new Pending(ArchiveFormat.KIND_TYPED, ChunkBuilder.tagBytes(LOSS_RECORD),
                         json.getBytes(StandardCharsets.UTF_8), now, now));
             }
@@ -460,6 +465,6 @@ public final class Recorder implements DatagramHandler, AutoCloseable {
     private record Pending(int kind, byte[] tag, byte[] body, long extra, long takenNs) {
     }
 
-    private record Sealed(byte[] bytes, int packets, long firstTimeNs) {
+    private record Sealed(byte[] bytes, int packets, long firstTimeNs, long lastTimeNs) {
     }
 }
