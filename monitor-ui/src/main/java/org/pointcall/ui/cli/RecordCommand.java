@@ -50,7 +50,8 @@ public final class RecordCommand implements Callable<Integer> {
             description = "force each chunk to the device, or leave it to the OS (default: ${DEFAULT-VALUE})")
     String sync;
 
-    @Option(names = "--any-sender", description = "accept datagrams from any address (default: only the host listened on)")
+    @Option(names = "--any-sender",
+            description = "accept datagrams from any address (default: only the host listened on)")
     boolean anySender;
 
     @Spec

@@ -412,7 +412,8 @@ public final class Recorder implements DatagramHandler, AutoCloseable {
                     + " is on disk; " + (lost == 0 ? "nothing was lost" : lost + " packets were lost" + span));
             if (!stopping) {
                 String json = "{\"failedAtNs\":" + failingSinceNs + ",\"resumedAtNs\":" + now + ",\"packetsLost\":"
-                        + lost + (lost == 0 ? "" : ",\"lostFromNs\":" + lostFirstNs + ",\"lostToNs\":" + lostLastNs) + "}";
+                        + lost + (lost == 0 ? "" : ",\"lostFromNs\":" + lostFirstNs + ",\"lostToNs\":" + lostLastNs)
+                        + "}";
                 enqueue(new Pending(ArchiveFormat.KIND_TYPED, ChunkBuilder.tagBytes(LOSS_RECORD),
                         json.getBytes(StandardCharsets.UTF_8), now, now));
             }
@@ -431,7 +432,8 @@ public final class Recorder implements DatagramHandler, AutoCloseable {
             alarm(AlarmKind.WRITE_FAILED, "RECORDING AT RISK: cannot write " + file + ": " + e.getMessage()
                     + (e.getMessage() != null && e.getMessage().contains("space") ? "" : " (disk full?)")
                     + "; keeping the newest data in memory (up to " + (policy.memoryLimitBytes() >> 20)
-                    + " MiB) and retrying every " + String.format(Locale.ROOT, "%.1f s", policy.retryIntervalNs() / 1e9));
+                    + " MiB) and retrying every "
+                    + String.format(Locale.ROOT, "%.1f s", policy.retryIntervalNs() / 1e9));
         }
     }
 
