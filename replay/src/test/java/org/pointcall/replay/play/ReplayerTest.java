@@ -85,8 +85,8 @@ class ReplayerTest {
         long[] pausedAtClock = new long[1];
         ReplaySummary s = play(control, i -> {
             if (i == 100) {
+                pausedAtClock[0] = clock.nowNs(); // before pausing: the console moves the clock once paused
                 control.pause();
-                pausedAtClock[0] = clock.nowNs();
             }
         });
         console.join();
