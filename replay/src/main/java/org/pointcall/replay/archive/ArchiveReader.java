@@ -235,13 +235,13 @@ public final class ArchiveReader implements AutoCloseable {
         try {
             readFully(channel, buf, ci.offset());
         } catch (IOException e) {
-            damage.add(new Damage(ci.offset(), len, "chunk " + ci.number() + " at offset " + ci.offset()
+            addDamage(new Damage(ci.offset(), len, "chunk " + ci.number() + " at offset " + ci.offset()
                     + ": read failed (" + e.getMessage() + "), skipped"));
             return true;
         }
         String bad = checkChunk(buf, 0, len, crc);
         if (bad != null) {
-            damage.add(new Damage(ci.offset(), len, "chunk " + ci.number() + " at offset " + ci.offset() + ": " + bad
+            addDamage(new Damage(ci.offset(), len, "chunk " + ci.number() + " at offset " + ci.offset() + ": " + bad
                     + ", " + ci.records() + " records skipped"));
             return true;
         }
@@ -273,8 +273,18 @@ public final class ArchiveReader implements AutoCloseable {
         return true;
     }
 
+    /** Reading twice finds the same damage twice: keep it once. */
+    private void addDamage(Damage d) {
+        for (Damage known : damage) {
+            if (known.offset() == d.offset()) {
+                return;
+            }
+        }
+        damage.add(d);
+    }
+
     private boolean malformed(ChunkInfo ci, int record, int at) {
-        damage.add(new Damage(ci.offset() + at, ci.end() - ci.offset() - at, "chunk " + ci.number() + " at offset "
+        addDamage(new Damage(ci.offset() + at, ci.end() - ci.offset() - at, "chunk " + ci.number() + " at offset "
                 + ci.offset() + ": record " + record + " malformed at offset " + (ci.offset() + at)
                 + ", rest of the chunk skipped"));
         return true;

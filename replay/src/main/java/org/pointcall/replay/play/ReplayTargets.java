@@ -7,9 +7,12 @@ import org.pointcall.ingest.kafka.KafkaFrameSink;
 import org.pointcall.ingest.pipeline.PacketPipeline;
 import org.pointcall.ingest.pipeline.PacketQueue;
 import org.pointcall.ingest.udp.UdpSender;
+import org.pointcall.ingest.wire.DictionaryRegistry;
 import org.pointcall.ingest.wire.PacketDecoder;
 import org.pointcall.ingest.wire.PacketSink;
+import org.pointcall.ingest.wire.StreamFrameSink;
 import org.pointcall.ingest.wire.WireFormat;
+import org.pointcall.shared.dictionary.DictionaryFiles;
 
 /** The places a replay can go: a packet sink, the in-process pipeline, UDP, Kafka. */
 public final class ReplayTargets {
@@ -52,6 +55,14 @@ public final class ReplayTargets {
                 decoder.flushPending();
             }
         };
+    }
+
+    /**
+     * Decoded into frames on the replay thread: dictionaries are those given in {@code registry} and those the
+     * stream announces. {@link StreamFrameSink#of} adapts a plain frame sink.
+     */
+    public static ReplayTarget frames(DictionaryRegistry registry, StreamFrameSink sink) {
+        return decoder(new PacketDecoder(registry, DictionaryFiles::parse, sink), "replay");
     }
 
     /**

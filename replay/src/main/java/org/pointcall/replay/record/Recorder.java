@@ -203,6 +203,7 @@ public final class Recorder implements DatagramHandler, AutoCloseable {
      * @param timeNs the producer's own time of the record (data time, usually); the recorder also stamps when it
      *               took it, on the archive clock
      * @return false when over {@value #MAX_PENDING_RECORDS} records wait to be taken (the record is counted, not kept)
+     * @throws IllegalStateException after {@link #close}
      */
     public boolean appendRecord(String type, long timeNs, byte[] json) {
         byte[] tag = ChunkBuilder.tagBytes(type);
@@ -223,6 +224,10 @@ public final class Recorder implements DatagramHandler, AutoCloseable {
         if (stopping) {
             throw new IllegalStateException("recorder of " + file + " is closed");
         }
+        return take(p);
+    }
+
+    private boolean take(Pending p) {
         if (pendingCount.incrementAndGet() > MAX_PENDING_RECORDS) {
             pendingCount.decrementAndGet();
             recordsRefused.incrementAndGet();
@@ -295,10 +300,14 @@ public final class Recorder implements DatagramHandler, AutoCloseable {
                 LockSupport.parkNanos(IDLE_PARK_NS);
             }
         }
-        if (!chunk.isEmpty()) {
-            seal();
+        for (int pass = 0; pass < 2; pass++) {
+            // a second pass writes the loss record a successful last write may have left
+            takeRecords();
+            if (!chunk.isEmpty()) {
+                seal();
+            }
+            writeHeld(true);
         }
-        writeHeld(true);
         if (!held.isEmpty()) {
             long lost = 0;
             for (Sealed s : held) {
@@ -410,13 +419,10 @@ public final class Recorder implements DatagramHandler, AutoCloseable {
             alarm(AlarmKind.WRITING_AGAIN, "writing " + file + " again after "
                     + String.format(Locale.ROOT, "%.1f s", (now - failingSinceNs) / 1e9) + "; the data held in memory"
                     + " is on disk; " + (lost == 0 ? "nothing was lost" : lost + " packets were lost" + span));
-            if (!stopping) {
-                String json = "{\"failedAtNs\":" + failingSinceNs + ",\"resumedAtNs\":" + now + ",\"packetsLost\":"
-                        + lost + (lost == 0 ? "" : ",\"lostFromNs\":" + lostFirstNs + ",\"lostToNs\":" + lostLastNs)
-                        + "}";
-                enqueue(new Pending(ArchiveFormat.KIND_TYPED, ChunkBuilder.tagBytes(LOSS_RECORD),
-                        json.getBytes(StandardCharsets.UTF_8), now, now));
-            }
+            String json = "{\"failedAtNs\":" + failingSinceNs + ",\"resumedAtNs\":" + now + ",\"packetsLost\":"
+                    + lost + (lost == 0 ? "" : ",\"lostFromNs\":" + lostFirstNs + ",\"lostToNs\":" + lostLastNs) + "}";
+            take(new Pending(ArchiveFormat.KIND_TYPED, ChunkBuilder.tagBytes(LOSS_RECORD),
+                    json.getBytes(StandardCharsets.UTF_8), now, now));
         }
     }
 
