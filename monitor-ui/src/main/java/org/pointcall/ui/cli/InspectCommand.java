@@ -40,7 +40,8 @@ import picocli.CommandLine.Model.CommandSpec;
         })
 public final class InspectCommand implements Callable<Integer> {
 
-    @Option(names = "--input", required = true, paramLabel = "FILE", description = "recorded file (.csv, .xlsx) or sortie archive (" + ArchiveFormat.EXTENSION + ")")
+    @Option(names = "--input", required = true, paramLabel = "FILE",
+            description = "recorded file (.csv, .xlsx) or sortie archive (" + ArchiveFormat.EXTENSION + ")")
     Path input;
 
     @Option(names = "--dictionary", paramLabel = "FILE", description = "parameter dictionary (default: the demo one)")

@@ -25,9 +25,11 @@ import picocli.CommandLine.Model.CommandSpec;
         header = "Record a live UDP telemetry stream into a sortie archive.",
         mixinStandardHelpOptions = true,
         description = {
-            "Listens on a UDP address and keeps every datagram exactly as it arrived, with its arrival time,",
-            "in a new sortie archive in the given folder. Stops after --seconds, after --until-idle seconds",
-            "without a packet, or on Ctrl-C. Recorder alarms (disk full, falling behind) go to standard error."
+            "Listens on a UDP address and keeps every datagram exactly as it",
+            "arrived, with its arrival time, in a new sortie archive in the given",
+            "folder. Stops after --seconds, after --until-idle seconds without a",
+            "packet, or on Ctrl-C. Recorder alarms (disk full, falling behind) go to",
+            "standard error."
         })
 public final class RecordCommand implements Callable<Integer> {
     @Option(names = "--listen", required = true, paramLabel = "udp://HOST:PORT", description = "where to listen")

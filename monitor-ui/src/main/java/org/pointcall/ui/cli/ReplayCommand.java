@@ -39,8 +39,9 @@ import picocli.CommandLine.Model.CommandSpec;
         mixinStandardHelpOptions = true,
         description = {
             "Plays a sortie archive (" + ArchiveFormat.EXTENSION + ") packet by packet exactly as it was",
-            "received, on its arrival times, or a recorded CSV/XLSX file as a wire stream on its frame",
-            "times, at 0.1 to 100 times real time or as fast as the destination takes it."
+            "received, on its arrival times, or a CSV/XLSX file as a wire stream on",
+            "its frame times, at 0.1 to 100 times real time or as fast as the",
+            "destination takes it."
         })
 public final class ReplayCommand implements Callable<Integer> {
     @Option(names = "--input", required = true, paramLabel = "FILE", description = "sortie archive, or .csv/.xlsx")

@@ -76,8 +76,8 @@ public final class Replayer {
             return false;
         }
         int len = packet.remaining();
+        long now = clock.nowNs(); // the release instant: what a slow first send costs is not timing
         target.onPacket(packet, dataNs);
-        long now = clock.nowNs();
         if (packets == 0) {
             firstDataNs = dataNs;
             firstClockNs = now;
