@@ -28,6 +28,7 @@ import picocli.CommandLine.Command;
             SortieSetCommand.class,
             TrainCommand.class,
             EvaluateCommand.class,
+            AnalyzeCommand.class,
             BenchCommand.class,
             CommandLine.HelpCommand.class
         })
