@@ -29,6 +29,8 @@ import picocli.CommandLine.Command;
             TrainCommand.class,
             EvaluateCommand.class,
             AnalyzeCommand.class,
+            MonitorCommand.class,
+            NextCardCommand.class,
             BenchCommand.class,
             CommandLine.HelpCommand.class
         })
