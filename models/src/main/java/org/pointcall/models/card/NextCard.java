@@ -100,9 +100,12 @@ public final class NextCard {
                 out.add("stay inside the limits (" + reason.text() + ")");
             }
         }
-        if (out.isEmpty() && o.operatorCall() != null) {
-            out.add(o.operatorCall().note().isEmpty() ? "repeat called by the engineer"
-                    : "engineer: " + o.operatorCall().note());
+        if (o.operatorCall() != null && o.operatorCall().call() == Verdict.REPEAT) {
+            if (!o.operatorCall().note().isEmpty()) {
+                out.add("engineer: " + o.operatorCall().note());
+            } else if (out.isEmpty()) {
+                out.add("repeat called by the engineer");
+            }
         }
         if (out.isEmpty()) {
             for (Reason reason : o.reasons()) {

@@ -14,10 +14,11 @@ import org.pointcall.shared.outcome.Reason;
 /**
  * Judges one band of a flown point on its recorded history, by phase: {@code entry} the mean over
  * {@link #ENTRY_SPAN_S} up to the begin; {@code throughout} every sample from the begin to where the kind's
- * technique ends (the stall break, the wind-up's highest g, else the end): held when the time outside is at most
- * {@link #TRANSIENT_S} or, for a point with a hold time, when one unbroken stretch inside lasts the hold;
- * {@code rate} the least-squares slope over the band's interval before its key instant; {@code instant} the mean over
- * {@link #INSTANT_SPAN_S} around the instant; {@code result} the analysis metric. No value is never held.
+ * technique ends (the stall break, the wind-up's highest g, else the end), less a lead-in before the value first
+ * comes inside ({@link #LEAD_IN_S}): held when the time outside is at most {@link #TRANSIENT_S} or, for a point
+ * with a hold time, when one unbroken stretch inside lasts the hold; {@code rate} the least-squares slope over the
+ * band's interval before its key instant; {@code instant} the mean over {@link #INSTANT_SPAN_S} around the instant;
+ * {@code result} the analysis metric. No value is never held.
  */
 public final class PhaseJudge {
     /**
@@ -32,6 +33,12 @@ public final class PhaseJudge {
      * for load factor in a stall entry), and a detected begin may lie a fraction of a second off the true one.
      */
     public static final double TRANSIENT_S = 1.0;
+    /**
+     * Outside time at the start of a throughout span, before the value first comes inside, that is not counted when
+     * it ends within this of the begin, s: a detected begin can lie a few seconds before the technique is set up
+     * (the gear still travelling, the bank still being rolled in).
+     */
+    public static final double LEAD_IN_S = 5.0;
     /** Gaps between samples longer than this count only this much towards time outside or inside, s. */
     private static final double MAX_STEP_S = 0.5;
 
@@ -237,6 +244,7 @@ public final class PhaseJudge {
         double outsideS;
         double longestInsideS;
         double worstSi = Double.NaN;
+        boolean entered;
     }
 
     private static Span span(PointHistory h, String name, Band b, long fromNs, long toNs) {
@@ -244,6 +252,7 @@ public final class PhaseJudge {
         double worstMargin = Double.POSITIVE_INFINITY;
         double run = 0;
         long prevNs = Long.MIN_VALUE;
+        long leadInNs = Math.round(LEAD_IN_S * 1e9);
         for (int i = h.firstAtOrAfter(fromNs); i < h.size() && h.timeNs(i) <= toNs; i++) {
             double v = h.valueSi(name, i);
             if (!Double.isFinite(v)) {
@@ -260,6 +269,14 @@ public final class PhaseJudge {
                 s.worstSi = v;
             }
             if (b.contains(v)) {
+                if (!s.entered) {
+                    s.entered = true;
+                    if (t - fromNs <= leadInNs) {
+                        s.outsideS = 0; // still setting up: the detected begin came early
+                        worstMargin = m;
+                        s.worstSi = v;
+                    }
+                }
                 run += stepS;
                 s.longestInsideS = Math.max(s.longestInsideS, run);
             } else {
