@@ -312,7 +312,7 @@ public final class CardSession {
         if (discarded || cutShort) {
             List<Reason> why = new ArrayList<>();
             List<String> notes = new ArrayList<>();
-            if (discarded) {
+            if (!cutShort) {
                 String failed = e.evidence().stream().filter(s -> s.startsWith("failed ")).findFirst()
                         .map(s -> s.substring("failed ".length())).orElse("its checks");
                 why.add(new Reason("point", "abandoned: the detector discarded it (" + failed + ")"));
