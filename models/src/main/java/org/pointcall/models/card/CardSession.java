@@ -631,8 +631,15 @@ public final class CardSession {
                 return;
             }
             String p = band.parameter();
+            Map<String, Long> hints = active.hints;
+            if (band.phase() == BandPhase.THROUGHOUT
+                    && PhaseJudge.throughoutEndNs(point.kind(), hints, Long.MAX_VALUE) < nowNs) {
+                return; // the technique is over (the stall has broken): the band no longer applies
+            }
             if (band.phase() == BandPhase.RATE) {
-                valueSi = PhaseJudge.slope(history, p, nowNs - Math.round(band.overS() * 1e9), nowNs);
+                Long at = hints.get(band.instant());
+                long to = at == null ? nowNs : Math.min(at, nowNs);
+                valueSi = PhaseJudge.slope(history, p, to - Math.round(band.overS() * 1e9), to);
             } else {
                 double v = history.valueSi(p, history.size() - 1);
                 if (Double.isFinite(v)) {
