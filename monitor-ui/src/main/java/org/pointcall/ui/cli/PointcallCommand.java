@@ -30,6 +30,9 @@ import picocli.CommandLine.Command;
             SortieSetCommand.class,
             TrainCommand.class,
             EvaluateCommand.class,
+            AnalyzeCommand.class,
+            MonitorCommand.class,
+            NextCardCommand.class,
             BenchCommand.class,
             CommandLine.HelpCommand.class
         })
