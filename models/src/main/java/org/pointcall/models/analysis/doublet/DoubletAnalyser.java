@@ -35,7 +35,7 @@ import org.pointcall.shared.kind.ManoeuvreKind;
  * </ul>
  */
 public final class DoubletAnalyser implements ManoeuvreAnalyser {
-    static final double FIT_DELAY_S = 0.15;
+    static final double FIT_DELAY_S = 0.05;
     static final double FIT_LENGTH_S = 4.0;
     private static final double ELEVATOR_FLOOR_RAD = Math.toRadians(0.2);
     /** The responses fitted together: the short period shows in all three. */
