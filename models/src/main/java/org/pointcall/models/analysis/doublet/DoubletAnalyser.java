@@ -25,7 +25,7 @@ import org.pointcall.shared.kind.ManoeuvreKind;
  *     ({@link ControlRelease}); {@code input}: the hint, else the first instant it left its trim;</li>
  * <li>{@code sp-frequency}, {@code sp-damping}: least-squares fit of a second-order free response with an offset,
  *     one mode shared by the pitch rate, the angle of attack and the load factor (those present; each with its own
- *     offset and amplitudes, weighted by its inverse noise variance), over the 4 s from 0.15 s after the release
+ *     offset and amplitudes, weighted by its inverse noise variance), over the 4 s from 0.05 s after the release
  *     ({@link DampedResponseFit#fitJoint}, variable projection and Levenberg-Marquardt);</li>
  * <li>{@code sp-damping-tpr}: the cross-check, the damping ratio from the transient peak ratio of the first two
  *     half-cycle peaks of the same response about the fitted offset ({@link PeakRatios}); a note when the two
