@@ -60,6 +60,19 @@ class TrainEvaluateCommandTest {
     }
 
     @Test
+    void evaluateAnalysisComparesEveryTruthPointWithItsAnalysis() {
+        CommandRun r = CommandRun.of("evaluate", "--analysis", "--data", dir.resolve("set").toString());
+        assertEquals(0, r.exitCode(), r.err());
+        assertEquals("4", r.figures().get("analysis.sorties"));
+        // this card flies an aileron roll and a sideslip: their metrics are compared
+        assertTrue(r.figures().containsKey("analysis.aileron-roll.time-to-90.median-abs-error"), r.out());
+        assertTrue(r.figures().containsKey("analysis.sideslip.rudder-per-beta.median-abs-error"), r.out());
+        CommandRun none = CommandRun.of("evaluate", "--data", dir.resolve("set").toString());
+        assertTrue(none.exitCode() != 0, none.out());
+        assertTrue((none.err() + none.out()).contains("--model"), none.err() + none.out());
+    }
+
+    @Test
     void sortieSetWritesOneFolderPerSortie() {
         assertEquals(0, sortieSet.exitCode(), sortieSet.err());
         assertEquals("4", sortieSet.figures().get("sorties"));

@@ -25,7 +25,7 @@ import org.pointcall.shared.kind.ManoeuvreKind;
  *     ({@link ControlRelease}); {@code input}: the hint, else the first instant it left its trim;</li>
  * <li>{@code sp-frequency}, {@code sp-damping}: least-squares fit of a second-order free response with an offset,
  *     one mode shared by the pitch rate, the angle of attack and the load factor (those present; each with its own
- *     offset and amplitudes, weighted by its inverse noise variance), over the 4 s from 0.15 s after the release
+ *     offset and amplitudes, weighted by its inverse noise variance), over the 4 s from 0.05 s after the release
  *     ({@link DampedResponseFit#fitJoint}, variable projection and Levenberg-Marquardt);</li>
  * <li>{@code sp-damping-tpr}: the cross-check, the damping ratio from the transient peak ratio of the first two
  *     half-cycle peaks of the same response about the fitted offset ({@link PeakRatios}); a note when the two
@@ -35,7 +35,7 @@ import org.pointcall.shared.kind.ManoeuvreKind;
  * </ul>
  */
 public final class DoubletAnalyser implements ManoeuvreAnalyser {
-    static final double FIT_DELAY_S = 0.15;
+    static final double FIT_DELAY_S = 0.05;
     static final double FIT_LENGTH_S = 4.0;
     private static final double ELEVATOR_FLOOR_RAD = Math.toRadians(0.2);
     /** The responses fitted together: the short period shows in all three. */

@@ -16,11 +16,11 @@ import org.pointcall.shared.kind.ManoeuvreKind;
  * Stabilised point.
  *
  * <ul>
- * <li>the steady window: pressure altitude and KCAS, averaged over 1 s blocks (so the noise the test sees is
- *     independent from sample to sample), each through the filtered variance-ratio test of Cao and Rhinehart
- *     ({@link VarianceRatioTest}, recommended factors); the longest run of blocks steady in both, within the point,
- *     stretched back by the filters' memory (10 blocks: a ratio turns steady only once the filtered deviation has
- *     forgotten the transient) but not before the begin; {@code start} and {@code end} its edges and
+ * <li>the steady window: pressure altitude and KCAS, sampled every 0.25 s (so their sensor noise is independent
+ *     from sample to sample: the test judges a drift against that noise), each through the filtered variance-ratio
+ *     test of Cao and Rhinehart ({@link VarianceRatioTest}, recommended factors); the longest run of samples steady
+ *     in both (unsteady stretches under 1 s inside it bridged: the ratio has false alarms), within the point, stretched back by the filters' memory (10 samples: a ratio turns steady only
+ *     once the filtered deviation has forgotten the transient) but not before the begin; {@code start} and {@code end} its edges and
  *     {@code hold-time} its length. When the filters could not warm up within the point's pre-roll or no block is
  *     steady, the whole point is taken, with a note;</li>
  * <li>drift rates: least-squares slopes over the window of pressure altitude, KCAS and (unwrapped) heading;</li>
@@ -29,7 +29,10 @@ import org.pointcall.shared.kind.ManoeuvreKind;
  * </ul>
  */
 public final class StabilisedAnalyser implements ManoeuvreAnalyser {
-    private static final double BLOCK_S = 1.0;
+    /** Sampling interval of the test: sensor noise stays independent from sample to sample at this spacing. */
+    private static final double BLOCK_S = 0.25;
+    /** Unsteady stretches shorter than this (1 s) inside a steady run are bridged. */
+    private static final int BRIDGE_SAMPLES = 4;
     private static final List<String> AVERAGED = List.of("Hp", "KCAS", "Mach", "Nz", "AoA", "AoS");
 
     private final VarianceRatioTest test;
@@ -63,7 +66,7 @@ public final class StabilisedAnalyser implements ManoeuvreAnalyser {
         r.instant("start", beginNs, a);
         r.instant("end", beginNs, b);
         String how = String.format(Locale.ROOT, "over the steady window %.1f to %.1f s (Cao-Rhinehart filtered "
-                + "variance ratio on 1 s blocks of Hp and KCAS)", a, b);
+                + "variance ratio on Hp and KCAS every 0.25 s)", a, b);
         r.metric("hold-time", b - a, "length of the steady window (Cao-Rhinehart filtered variance-ratio test)");
         for (String[] d : new String[][] {{"Hp", "hp-drift"}, {"KCAS", "kcas-drift"}}) {
             if (history.has(d[0])) {
@@ -94,7 +97,7 @@ public final class StabilisedAnalyser implements ManoeuvreAnalyser {
             return new double[] {0.0, endS};
         }
         double first = (history.firstNs() - beginNs) * 1e-9;
-        // blocks laid from the begin backwards into the pre-roll, so that one edge falls on the begin
+        // test instants laid from the begin backwards into the pre-roll, so that one falls on the begin
         int before = (int) Math.floor(-first / BLOCK_S);
         int count = before + (int) Math.floor(endS / BLOCK_S);
         double origin = -before * BLOCK_S;
@@ -102,14 +105,33 @@ public final class StabilisedAnalyser implements ManoeuvreAnalyser {
         double[] kcas = blocks(Series.cleanOf(history, "KCAS", beginNs), origin, count);
         boolean[] sh = test.steady(hp);
         boolean[] sk = test.steady(kcas);
+        boolean[] ok = new boolean[count];
+        for (int i = 0; i < count; i++) {
+            ok[i] = sh[i] && sk[i] && Double.isFinite(hp[i]) && Double.isFinite(kcas[i]);
+        }
+        // the ratio itself is noisy: a few unsteady samples inside a steady run are its false alarms, not a change
+        for (int i = 0; i < count; i++) {
+            if (!ok[i]) {
+                int j = i;
+                while (j < count && !ok[j]) {
+                    j++;
+                }
+                if (i > 0 && j < count && j - i < BRIDGE_SAMPLES) {
+                    for (int k = i; k < j; k++) {
+                        ok[k] = true;
+                    }
+                }
+                i = j;
+            }
+        }
         int bestStart = -1;
         int bestLen = 0;
         int runStart = -1;
         for (int i = 0; i <= count; i++) {
-            boolean ok = i < count && sh[i] && sk[i] && Double.isFinite(hp[i]) && Double.isFinite(kcas[i]);
-            if (ok && runStart < 0) {
+            boolean steady = i < count && ok[i];
+            if (steady && runStart < 0) {
                 runStart = i;
-            } else if (!ok && runStart >= 0) {
+            } else if (!steady && runStart >= 0) {
                 int len = i - runStart;
                 if (len > bestLen) {
                     bestLen = len;
@@ -132,10 +154,12 @@ public final class StabilisedAnalyser implements ManoeuvreAnalyser {
         return new double[] {a, b};
     }
 
+    /** The sample nearest each test instant (not averaged: averaging would shrink the noise the test scales by). */
     private static double[] blocks(Series s, double origin, int count) {
         double[] out = new double[count];
         for (int i = 0; i < count; i++) {
-            out[i] = s.mean(origin + i * BLOCK_S, origin + (i + 1) * BLOCK_S - 1e-9);
+            int k = s.nearest(origin + i * BLOCK_S);
+            out[i] = k >= 0 && Math.abs(s.t(k) - (origin + i * BLOCK_S)) <= BLOCK_S ? s.v(k) : Double.NaN;
         }
         return out;
     }

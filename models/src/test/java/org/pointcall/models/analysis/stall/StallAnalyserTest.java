@@ -67,4 +67,20 @@ class StallAnalyserTest {
         // Vs_n = Vs sqrt(n) (Anderson, Introduction to Flight; check-values.md): 110 kt at n 1.1547 is 102.37 kt at 1 g
         assertEquals(110.0 / Math.sqrt(n), Unit.KNOT.fromSi(r.metricSi("stall-kcas-1g").getAsDouble()), 0.07);
     }
+
+    /** Vs 50 kt at 1 g is 59.5 kt in a 45 deg level turn (check-values.md, computed from Vs_n = Vs sqrt(n), n =
+     *  1 / cos(phi), 3 printed digits): back from 59.5 kt at n = sqrt(2), the 1-g equivalent is 50.0 kt. */
+    @Test
+    void oneGEquivalentStallSpeedAtTheWorkedValue() {
+        double n = 1.0 / Math.cos(Math.toRadians(45));
+        PointHistory h = new Histories()
+                .with("KCAS", t -> t <= BREAK_S ? 59.5 + 1.0 * (BREAK_S - t) : 59.5 + 3 * (t - BREAK_S))
+                .with("AoA", t -> t <= BREAK_S ? 16.0 - 0.3 * (BREAK_S - t) : Math.max(4.0, 16.0 - 4.0 * (t - BREAK_S)))
+                .with("Nz", t -> t <= BREAK_S ? n : 1.0)
+                .with("Roll", t -> -45.0)
+                .sample(T0, -3.0, 30.0, 1.0 / 32, 1);
+        ManoeuvreResult r = Analysers.analyse(ManoeuvreKind.STALL_TURN, h, T0, T0 + 30_000_000_000L, Map.of(),
+                Map.of());
+        assertEquals(50.0, Unit.KNOT.fromSi(r.metricSi("stall-kcas-1g").getAsDouble()), 0.05);
+    }
 }
