@@ -29,6 +29,7 @@ import picocli.CommandLine.Command;
             TrainCommand.class,
             EvaluateCommand.class,
             BenchCommand.class,
+            DemoCommand.class,
             CommandLine.HelpCommand.class
         })
 public final class PointcallCommand implements Runnable {
