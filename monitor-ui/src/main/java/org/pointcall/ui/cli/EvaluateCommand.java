@@ -40,7 +40,8 @@ import picocli.CommandLine.Model.CommandSpec;
         })
 public final class EvaluateCommand implements Callable<Integer> {
 
-    @Option(names = "--model", required = true, paramLabel = "MODEL", description = "model file")
+    @Option(names = "--model", paramLabel = "MODEL",
+            description = "model file (with --verdicts: default the one in the jar)")
     Path modelFile;
 
     @Option(names = "--data", arity = "1..*", paramLabel = "DIR",
@@ -57,12 +58,25 @@ public final class EvaluateCommand implements Callable<Integer> {
             description = "parameter dictionary (default: each sortie's dictionary.yaml, else the demo one)")
     Path dictionaryFile;
 
+    @Option(names = "--verdicts", description = "compare the card verdicts with each sortie's truth instead")
+    boolean verdicts;
+
+    @Option(names = "--card", paramLabel = "CARD", description = "with --verdicts: card (default: each sortie's)")
+    Path cardFile;
+
     @Spec
     CommandSpec spec;
 
     @Override
     public Integer call() {
         PrintWriter w = spec.commandLine().getOut();
+        if (verdicts) {
+            VerdictCheck.run(w, modelFile, cardFile, dictionaryFile, data);
+            return 0;
+        }
+        if (modelFile == null) {
+            throw new PointcallException("give --model MODEL");
+        }
         if (!Files.isRegularFile(modelFile)) {
             throw new PointcallException(modelFile + ": no such model file");
         }

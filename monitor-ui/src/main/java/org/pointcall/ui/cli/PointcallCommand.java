@@ -28,6 +28,9 @@ import picocli.CommandLine.Command;
             SortieSetCommand.class,
             TrainCommand.class,
             EvaluateCommand.class,
+            AnalyzeCommand.class,
+            MonitorCommand.class,
+            NextCardCommand.class,
             BenchCommand.class,
             DemoCommand.class,
             CommandLine.HelpCommand.class

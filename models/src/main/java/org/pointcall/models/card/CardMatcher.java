@@ -1,0 +1,136 @@
+package org.pointcall.models.card;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Objects;
+import java.util.Optional;
+
+import org.pointcall.shared.card.TestCard;
+import org.pointcall.shared.card.TestPoint;
+import org.pointcall.shared.kind.ManoeuvreKind;
+import org.pointcall.shared.outcome.Verdict;
+
+/**
+ * Binds detections to card points. A detection of a kind takes, in this order: the armed point when it is of that
+ * kind; else the first point of that kind in card order still waiting for a completed flight (pending or
+ * abandoned); else the first point of that kind whose latest call is repeat (flown again). A detection that finds
+ * none is an unplanned manoeuvre. Single-threaded (the session's thread).
+ */
+public final class CardMatcher {
+    private final TestCard card;
+    private final CardPointState[] states;
+    private final CardPointState[] before;
+    private int armed = -1;
+
+    public CardMatcher(TestCard card) {
+        this.card = Objects.requireNonNull(card, "card");
+        this.states = new CardPointState[card.points().size()];
+        this.before = new CardPointState[states.length];
+        java.util.Arrays.fill(states, CardPointState.PENDING);
+    }
+
+    public TestCard card() {
+        return card;
+    }
+
+    /** Arms the point: it takes the next detection of its kind. Arming another point disarms this one. */
+    public void arm(String cardId) {
+        int i = index(cardId);
+        if (states[i] == CardPointState.FLYING) {
+            throw new IllegalArgumentException("card point " + cardId + " is being flown; arm it after it ends");
+        }
+        disarm();
+        armed = i;
+        before[i] = states[i];
+        states[i] = CardPointState.ARMED;
+    }
+
+    /** Takes the arming back; the point returns to what it was. */
+    public void disarm() {
+        if (armed >= 0 && states[armed] == CardPointState.ARMED) {
+            states[armed] = before[armed];
+        }
+        armed = -1;
+    }
+
+    /** The armed point, if any. */
+    public Optional<TestPoint> armed() {
+        return armed < 0 ? Optional.empty() : Optional.of(card.points().get(armed));
+    }
+
+    /** Binds a detection of {@code kind}: the card point it is, marked flying; empty for an unplanned one. */
+    public Optional<TestPoint> bind(ManoeuvreKind kind) {
+        int i = -1;
+        if (armed >= 0 && card.points().get(armed).kind() == kind) {
+            i = armed;
+            armed = -1;
+            states[i] = before[i];
+        }
+        for (int j = 0; i < 0 && j < states.length; j++) {
+            if (card.points().get(j).kind() == kind && states[j].awaitsFlight() && j != armed) {
+                i = j;
+            }
+        }
+        for (int j = 0; i < 0 && j < states.length; j++) {
+            if (card.points().get(j).kind() == kind && states[j] == CardPointState.REPEAT) {
+                i = j;
+            }
+        }
+        if (i < 0) {
+            return Optional.empty();
+        }
+        before[i] = states[i];
+        states[i] = CardPointState.FLYING;
+        return Optional.of(card.points().get(i));
+    }
+
+    /** The flight bound to {@code cardId} is no longer this point (its detection changed kind): undo the bind. */
+    public void unbind(String cardId) {
+        int i = index(cardId);
+        if (states[i] == CardPointState.FLYING) {
+            states[i] = before[i];
+        }
+    }
+
+    /** The flight bound to {@code cardId} is over with {@code verdict} (or the engineer called it). */
+    public void settle(String cardId, Verdict verdict) {
+        int i = index(cardId);
+        states[i] = switch (verdict) {
+            case GOOD -> CardPointState.GOOD;
+            case REPEAT -> CardPointState.REPEAT;
+            case INCOMPLETE -> CardPointState.INCOMPLETE;
+        };
+        if (armed == i) {
+            armed = -1;
+        }
+    }
+
+    public CardPointState state(String cardId) {
+        return states[index(cardId)];
+    }
+
+    /** States in card order. */
+    public List<CardPointState> states() {
+        return List.of(states);
+    }
+
+    /** Card points with no completed flight (never flown, or only abandoned), in card order. */
+    public List<String> notFlown() {
+        List<String> out = new ArrayList<>();
+        for (int i = 0; i < states.length; i++) {
+            if (states[i].awaitsFlight() || states[i] == CardPointState.FLYING) {
+                out.add(card.points().get(i).id());
+            }
+        }
+        return out;
+    }
+
+    private int index(String cardId) {
+        for (int i = 0; i < states.length; i++) {
+            if (card.points().get(i).id().equals(cardId)) {
+                return i;
+            }
+        }
+        throw new IllegalArgumentException("card " + card.sortie() + " has no point '" + cardId + "'");
+    }
+}

@@ -1,0 +1,679 @@
+package org.pointcall.models.card;
+
+import java.util.ArrayDeque;
+import java.util.ArrayList;
+import java.util.Deque;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.Optional;
+import java.util.concurrent.ConcurrentLinkedQueue;
+
+import org.pointcall.ingest.derive.DerivedParameters;
+import org.pointcall.ingest.frame.Frame;
+import org.pointcall.ingest.window.FeatureExtractor;
+import org.pointcall.models.analysis.ManoeuvreAnalyser;
+import org.pointcall.models.analysis.ManoeuvreResult;
+import org.pointcall.models.analysis.PointHistory;
+import org.pointcall.models.data.LabelledRows;
+import org.pointcall.models.detect.ClassLayout;
+import org.pointcall.models.detect.KeyInstant;
+import org.pointcall.models.detect.PointDetector;
+import org.pointcall.models.detect.PointEvent;
+import org.pointcall.models.train.Classifier;
+import org.pointcall.shared.card.Band;
+import org.pointcall.shared.card.BandPhase;
+import org.pointcall.shared.card.TestCard;
+import org.pointcall.shared.card.TestPoint;
+import org.pointcall.shared.dictionary.ParameterDictionary;
+import org.pointcall.shared.kind.ManoeuvreKind;
+import org.pointcall.shared.kind.MetricSpec;
+import org.pointcall.shared.outcome.BandResult;
+import org.pointcall.shared.outcome.BandStatus;
+import org.pointcall.shared.outcome.LimitAlarm;
+import org.pointcall.shared.outcome.MetricValue;
+import org.pointcall.shared.outcome.Numbers;
+import org.pointcall.shared.outcome.OperatorCall;
+import org.pointcall.shared.outcome.PointOutcome;
+import org.pointcall.shared.outcome.PointsFile;
+import org.pointcall.shared.outcome.Reason;
+import org.pointcall.shared.outcome.SessionEvent;
+import org.pointcall.shared.outcome.Verdict;
+
+/**
+ * A test card flown live: frames in, session events out. Per frame, in data-time order: derived parameters, the
+ * point's history, the safety limits, the detector model's windows (a tick's probabilities go to the
+ * {@link PointDetector}, as {@code StreamingScorer} plays a recording) and the detector's physics. Each detected
+ * point is bound to a card point ({@link CardMatcher}); the bound point's bands are gauged live at every decision
+ * tick; at its end the kind's analyser computes its metrics, every band is judged in its phase
+ * ({@link PhaseJudge}) and a verdict is given with its reasons ({@link Verdicts}).
+ *
+ * <p>Threads: {@link #onFrame} and {@link #finish} on one thread (the stream's pipeline thread), where listener
+ * calls happen too. {@link #arm}, {@link #call} and {@link #snapshot} may be called from any thread: commands are
+ * queued and applied before the next frame, at its data time; the snapshot is an immutable value replaced at most
+ * every {@link SessionSetup#snapshotIntervalS()} of data time and at every event. Time is the data's own: nothing
+ * reads a clock.
+ */
+public final class CardSession {
+    /** History kept before a point's begin and while idle, s: covers a begin reported late and rates before it. */
+    public static final double PREROLL_S = 30.0;
+    /** Alarm changes kept in a snapshot. */
+    public static final int RECENT_ALARMS = 10;
+    private static final int NOTICES = 5;
+    /** A gauge's status changes once the new one has held this many decision ticks (no chatter on noise). */
+    private static final int STATUS_TICKS = 3;
+    /**
+     * A point ended by the stream's end within this of the last frame was still being flown, s (unless it had
+     * already lasted its hold time: a held condition is complete once held).
+     */
+    private static final double STILL_FLYING_S = 2.0;
+
+    private final SessionSetup setup;
+    private final ParameterDictionary dictionary;
+    private final TestCard card;
+    private final CardMatcher matcher;
+    private final Classifier classifier;
+    private final DerivedParameters derived;
+    private final FeatureExtractor extractor;
+    private final PointDetector detector;
+    private final double[] posterior = new double[LabelledRows.classCount()];
+    private final LimitWatch limits;
+    private final PointHistory history;
+    private final SessionListener listener;
+    private final ConcurrentLinkedQueue<Command> commands = new ConcurrentLinkedQueue<>();
+    private final long prerollNs = Math.round(PREROLL_S * 1e9);
+    private final long snapshotNs;
+
+    private final List<PointOutcome> outcomes = new ArrayList<>();
+    private final List<LimitAlarm> alarms = new ArrayList<>();
+    private final Deque<String> notices = new ArrayDeque<>();
+    private volatile SessionSnapshot snapshot;
+
+    private Active active;
+    private long frames;
+    private long ticks;
+    private long firstFrameNs = Long.MIN_VALUE;
+    private long lastFrameNs = Long.MIN_VALUE;
+    private long currentFrameNs;
+    private boolean pending;
+    private long pendingNs;
+    private long lastTickNs = Long.MIN_VALUE;
+    private long lastPublishNs = Long.MIN_VALUE;
+    private long lastTrimNs = Long.MIN_VALUE;
+    private boolean finishing;
+    private boolean finished;
+    private int unplanned;
+    private int discardedUnbound;
+
+    /** An engineer's command, applied on the session thread. */
+    private sealed interface Command {
+    }
+
+    private record Arm(String cardId) implements Command {
+    }
+
+    private record Call(String cardId, Verdict call, String note) implements Command {
+    }
+
+    public CardSession(SessionSetup setup, SessionListener listener) {
+        this.setup = Objects.requireNonNull(setup, "setup");
+        this.listener = Objects.requireNonNull(listener, "listener");
+        this.dictionary = setup.dictionary();
+        this.card = setup.card();
+        this.matcher = card == null ? null : new CardMatcher(card);
+        this.classifier = setup.classifier().copy();
+        if (!classifier.featureNames().equals(setup.model().features())) {
+            throw new IllegalArgumentException("the classifier's features are not the model description's");
+        }
+        this.derived = DerivedParameters.bind(dictionary);
+        this.extractor = FeatureExtractor.bind(dictionary, setup.model().windows(), setup.model().extractor(),
+                this::onFeatures);
+        this.detector = PointDetector.bind(dictionary, ClassLayout.standard(), setup.detectorSettings(),
+                this::onPointEvent);
+        this.limits = new LimitWatch(card == null ? List.of() : card.limits(), dictionary, this::onAlarm);
+        this.history = PointHistory.ofAll(dictionary, 64 * 120);
+        this.snapshotNs = Math.round(setup.snapshotIntervalS() * 1e9);
+        publish(0);
+    }
+
+    // ------------------------------------------------------------------------------------ commands (any thread)
+
+    /**
+     * Arms a card point: the next detection of its kind binds to it, before the card's order.
+     *
+     * @throws IllegalArgumentException when there is no card or no such point
+     */
+    public void arm(String cardId) {
+        checkPoint(cardId);
+        commands.add(new Arm(cardId));
+    }
+
+    /**
+     * The engineer's call on a card point's latest flight; it overrides the tool's verdict, which is kept.
+     *
+     * @param call GOOD or REPEAT
+     * @throws IllegalArgumentException when there is no card, no such point, or the call is not good or repeat
+     */
+    public void call(String cardId, Verdict call, String note) {
+        checkPoint(cardId);
+        if (call != Verdict.GOOD && call != Verdict.REPEAT) {
+            throw new IllegalArgumentException("an engineer calls a point good or repeat, not " + call);
+        }
+        commands.add(new Call(cardId, call, note));
+    }
+
+    /** The latest published snapshot; never null. */
+    public SessionSnapshot snapshot() {
+        return snapshot;
+    }
+
+    private void checkPoint(String cardId) {
+        if (card == null) {
+            throw new IllegalArgumentException("this session has no test card");
+        }
+        if (card.point(cardId).isEmpty()) {
+            throw new IllegalArgumentException("card " + card.sortie() + " has no point '" + cardId + "'");
+        }
+    }
+
+    // ------------------------------------------------------------------------------------ the stream
+
+    /** One frame as decoded, in the dictionary's units (derived parameters are computed into it here). */
+    public void onFrame(Frame f) {
+        if (finished) {
+            throw new IllegalStateException("the session has finished");
+        }
+        long t = f.timeNs();
+        if (frames == 0) {
+            firstFrameNs = t;
+            detector.init(t);
+        }
+        frames++;
+        lastFrameNs = Math.max(lastFrameNs, t);
+        currentFrameNs = t;
+        if (!commands.isEmpty()) {
+            applyCommands(t);
+        }
+        derived.apply(f);
+        history.append(f);
+        limits.onFrame(f, active == null || active.point == null ? null : active.point.id());
+        extractor.onFrame(f);
+        detector.onFrame(f);
+        // a tick at this frame's own instant fired inside the extractor; the detector gets it after the frame
+        if (pending) {
+            pending = false;
+            tick(pendingNs);
+        }
+        if (lastTrimNs == Long.MIN_VALUE || t - lastTrimNs > 5_000_000_000L) {
+            lastTrimNs = t;
+            long keep = (active == null ? t : Math.min(t, active.beginNs)) - prerollNs;
+            history.trimBefore(keep);
+        }
+    }
+
+    /**
+     * Ends the stream: a point still being flown is abandoned (INCOMPLETE), commands still queued are applied.
+     * Nothing more may be fed.
+     */
+    public void finish() {
+        if (finished) {
+            return;
+        }
+        long t = frames == 0 ? 0 : lastFrameNs;
+        applyCommands(t);
+        if (frames > 0) {
+            finishing = true;
+            detector.finish(lastFrameNs);
+            finishing = false;
+        }
+        finished = true;
+        publish(t);
+    }
+
+    private void onFeatures(long timeNs, double[] features, boolean[] valid, double[] coverage) {
+        classifier.predict(features, posterior);
+        if (timeNs >= currentFrameNs) {
+            pending = true;
+            pendingNs = timeNs;
+        } else {
+            tick(timeNs);
+        }
+    }
+
+    private void tick(long timeNs) {
+        ticks++;
+        detector.onTick(timeNs, posterior);
+        if (active != null) {
+            double dtS = lastTickNs == Long.MIN_VALUE ? 0 : Math.min(0.5, (timeNs - lastTickNs) * 1e-9);
+            for (LiveGauge g : active.gauges) {
+                g.update(timeNs, dtS);
+            }
+        }
+        lastTickNs = timeNs;
+        if (lastPublishNs == Long.MIN_VALUE || timeNs - lastPublishNs >= snapshotNs) {
+            publish(timeNs);
+        }
+    }
+
+    // ------------------------------------------------------------------------------------ detector events
+
+    private void onPointEvent(PointEvent e) {
+        switch (e.type()) {
+            case BEGUN -> begin(e);
+            case REFINED -> refine(e);
+            case ENDED, DISCARDED -> close(e);
+        }
+    }
+
+    private void begin(PointEvent e) {
+        Optional<TestPoint> bound = matcher == null ? Optional.empty() : matcher.bind(e.kind());
+        active = new Active(e, bound.orElse(null));
+        emit(new SessionEvent.PointStarted(e.reportedAtNs(), e.pointId(), e.kind().key(), active.cardId(),
+                active.title(), e.beginNs()));
+    }
+
+    private void refine(PointEvent e) {
+        if (active == null || active.detection != e.pointId()) {
+            return;
+        }
+        active.take(e);
+        if (e.kind() != active.kind) {
+            if (active.point != null) {
+                matcher.unbind(active.point.id());
+            }
+            Optional<TestPoint> bound = matcher == null ? Optional.empty() : matcher.bind(e.kind());
+            Active next = new Active(e, bound.orElse(null));
+            next.hints.putAll(active.hints);
+            active = next;
+            emit(new SessionEvent.PointStarted(e.reportedAtNs(), e.pointId(), e.kind().key(), active.cardId(),
+                    active.title(), e.beginNs()));
+        }
+    }
+
+    private void close(PointEvent e) {
+        Active a = active;
+        active = null;
+        if (a == null || a.detection != e.pointId()) {
+            a = new Active(e, matcher == null ? null : matcher.bind(e.kind()).orElse(null));
+        }
+        a.take(e);
+        boolean discarded = e.type() == PointEvent.Type.DISCARDED;
+        boolean cutShort = finishing && e.hasEvidence("ended by finish")
+                && e.endNs() >= lastFrameNs - Math.round(STILL_FLYING_S * 1e9)
+                && !(a.point != null && a.point.hasHold() && (e.endNs() - e.beginNs()) * 1e-9 >= a.point.holdS());
+        if (discarded && a.point == null) {
+            discardedUnbound++;
+            publish(e.reportedAtNs());
+            return;
+        }
+        PointOutcome o;
+        if (discarded || cutShort) {
+            List<Reason> why = new ArrayList<>();
+            List<String> notes = new ArrayList<>();
+            if (discarded) {
+                String failed = e.evidence().stream().filter(s -> s.startsWith("failed ")).findFirst()
+                        .map(s -> s.substring("failed ".length())).orElse("its checks");
+                why.add(new Reason("point", "abandoned: the detector discarded it (" + failed + ")"));
+            } else {
+                why.add(new Reason("point", "abandoned: the stream ended while the point was being flown"));
+            }
+            notes.addAll(e.evidence());
+            o = new PointOutcome(e.pointId(), a.cardId(), e.kind().key(), a.title(), e.beginNs(), e.endNs(),
+                    e.confidence(), a.point == null ? null : Verdict.INCOMPLETE, a.point == null ? List.of() : why,
+                    List.of(), List.of(), a.hints, notes, null);
+        } else {
+            o = judge(a, e);
+        }
+        outcomes.add(o);
+        if (a.point != null) {
+            matcher.settle(a.point.id(), o.verdict());
+            emit(new SessionEvent.PointFinished(e.reportedAtNs(), o));
+        } else if (card != null) {
+            unplanned++;
+            emit(new SessionEvent.Unplanned(e.reportedAtNs(), o));
+        } else {
+            emit(new SessionEvent.PointFinished(e.reportedAtNs(), o));
+        }
+    }
+
+    /** Analysis, bands, verdict of a completed point. */
+    private PointOutcome judge(Active a, PointEvent e) {
+        List<String> notes = new ArrayList<>();
+        Map<String, Double> intervals = new HashMap<>();
+        if (a.point != null) {
+            for (Band b : a.point.bands()) {
+                if (b.phase() == BandPhase.RATE) {
+                    intervals.put(b.subject(), b.overS());
+                }
+            }
+        }
+        ManoeuvreResult r = analyse(e.kind(), e.beginNs(), e.endNs(), a.hints, intervals, notes);
+        Map<String, Long> instants = new LinkedHashMap<>(a.hints);
+        instants.putAll(r.instantsNs());
+        List<MetricValue> metrics = new ArrayList<>();
+        for (MetricSpec ms : e.kind().metrics()) {
+            Double v = r.metricsSi().get(ms.name());
+            if (v != null) {
+                metrics.add(new MetricValue(ms.name(), ms.unit().fromSi(v), ms.unit().symbol(),
+                        r.methods().getOrDefault(ms.name(), "")));
+            }
+        }
+        for (Map.Entry<String, Double> m : new java.util.TreeMap<>(r.metricsSi()).entrySet()) {
+            if (e.kind().metric(m.getKey()).isEmpty()) {
+                metrics.add(new MetricValue(m.getKey(), m.getValue(), "SI", r.methods().getOrDefault(m.getKey(), "")));
+            }
+        }
+        notes.addAll(r.notes());
+        if (a.point == null) {
+            return new PointOutcome(e.pointId(), null, e.kind().key(), a.title(), e.beginNs(), e.endNs(),
+                    e.confidence(), null, List.of(), List.of(), metrics, instants, notes, null);
+        }
+        List<BandResult> bands = new ArrayList<>();
+        List<Reason> reasons = new ArrayList<>();
+        for (int i = 0; i < a.point.bands().size(); i++) {
+            PhaseJudge.Judged j = PhaseJudge.judge(a.point, i, history, e.beginNs(), e.endNs(), instants,
+                    r.metricsSi());
+            bands.add(j.result());
+            if (j.reason() != null) {
+                reasons.add(j.reason());
+            }
+        }
+        reasons.addAll(Verdicts.limitReasons(alarms, e.beginNs(), e.endNs()));
+        Verdict v = reasons.isEmpty() ? Verdict.GOOD : Verdict.REPEAT;
+        return new PointOutcome(e.pointId(), a.point.id(), e.kind().key(), a.title(), e.beginNs(), e.endNs(),
+                e.confidence(), v, reasons, bands, metrics, instants, notes, null);
+    }
+
+    private ManoeuvreResult analyse(ManoeuvreKind kind, long beginNs, long endNs, Map<String, Long> hints,
+                                    Map<String, Double> intervals, List<String> notes) {
+        Optional<ManoeuvreAnalyser> an;
+        try {
+            an = setup.analysers().forKind(kind);
+        } catch (RuntimeException ex) {
+            an = Optional.empty();
+        }
+        if (an.isEmpty()) {
+            notes.add("no analyser for " + kind.key() + " in this build: its metrics are not computed");
+            return empty(kind);
+        }
+        if (history.isEmpty()) {
+            return empty(kind);
+        }
+        try {
+            PointHistory slice = history.slice(beginNs - prerollNs, lastFrameNs);
+            return an.get().analyse(slice, beginNs, endNs, hints, intervals);
+        } catch (RuntimeException ex) {
+            // an analysis fault must not stop the session: the point is still judged on its parameter bands
+            notes.add("the " + kind.key() + " analysis failed (" + ex.getClass().getSimpleName() + ": "
+                    + ex.getMessage() + ")");
+            return empty(kind);
+        }
+    }
+
+    private static ManoeuvreResult empty(ManoeuvreKind kind) {
+        return new ManoeuvreResult(kind, Map.of(), Map.of(), Map.of(), List.of());
+    }
+
+    private void onAlarm(LimitAlarm a) {
+        alarms.add(a);
+        emit(new SessionEvent.AlarmChanged(a));
+    }
+
+    // ------------------------------------------------------------------------------------ commands
+
+    private void applyCommands(long nowNs) {
+        Command c;
+        while ((c = commands.poll()) != null) {
+            if (c instanceof Arm arm) {
+                try {
+                    matcher.arm(arm.cardId());
+                    emit(new SessionEvent.PointArmed(nowNs, arm.cardId()));
+                } catch (IllegalArgumentException ex) {
+                    notice(ex.getMessage());
+                }
+            } else if (c instanceof Call call) {
+                int i = lastOutcomeOf(call.cardId());
+                if (i < 0) {
+                    notice("no flight of " + call.cardId() + " to call yet");
+                    continue;
+                }
+                OperatorCall oc = new OperatorCall(call.cardId(), call.call(), call.note(), nowNs);
+                PointOutcome o = outcomes.get(i).withOperatorCall(oc);
+                outcomes.set(i, o);
+                if (matcher.state(call.cardId()) != CardPointState.FLYING) {
+                    matcher.settle(call.cardId(), call.call());
+                }
+                emit(new SessionEvent.CallTaken(oc, o.verdict()));
+            }
+        }
+    }
+
+    private int lastOutcomeOf(String cardId) {
+        for (int i = outcomes.size() - 1; i >= 0; i--) {
+            if (cardId.equals(outcomes.get(i).cardId())) {
+                return i;
+            }
+        }
+        return -1;
+    }
+
+    private void notice(String text) {
+        notices.addLast(text);
+        while (notices.size() > NOTICES) {
+            notices.removeFirst();
+        }
+    }
+
+    private void emit(SessionEvent e) {
+        try {
+            listener.onEvent(e);
+        } finally {
+            publish(e.timeNs());
+        }
+    }
+
+    // ------------------------------------------------------------------------------------ results
+
+    /** Every flown point so far (planned, unplanned, abandoned), in the order they ended. Session thread. */
+    public List<PointOutcome> outcomes() {
+        return List.copyOf(outcomes);
+    }
+
+    /** Every alarm change so far. Session thread. */
+    public List<LimitAlarm> alarms() {
+        return List.copyOf(alarms);
+    }
+
+    /** Card point ids with no completed flight, in card order (empty without a card). Session thread. */
+    public List<String> notFlown() {
+        return matcher == null ? List.of() : matcher.notFlown();
+    }
+
+    /** The points file of the session so far. Session thread. */
+    public PointsFile pointsFile(String source) {
+        return PointsFile.of(source, card == null ? "" : card.sortie(), card == null ? "" : card.airframe(),
+                outcomes, alarms, notFlown());
+    }
+
+    public long frames() {
+        return frames;
+    }
+
+    public long ticks() {
+        return ticks;
+    }
+
+    /** Detections that began and were discarded without being bound to a card point. */
+    public int discardedUnbound() {
+        return discardedUnbound;
+    }
+
+    /** Data time of the first frame, or {@link Long#MIN_VALUE} before any. */
+    public long firstFrameNs() {
+        return firstFrameNs;
+    }
+
+    public long lastFrameNs() {
+        return lastFrameNs;
+    }
+
+    public PointDetector detector() {
+        return detector;
+    }
+
+    public ParameterDictionary dictionary() {
+        return dictionary;
+    }
+
+    /** Limits of the card on parameters the dictionary lacks (not watched). */
+    public List<String> unwatchedLimits() {
+        return limits.unwatched();
+    }
+
+    private void publish(long nowNs) {
+        lastPublishNs = nowNs;
+        List<SessionSnapshot.CardPointView> views = new ArrayList<>();
+        if (card != null) {
+            List<CardPointState> states = matcher.states();
+            for (int i = 0; i < card.points().size(); i++) {
+                TestPoint p = card.points().get(i);
+                int k = lastOutcomeOf(p.id());
+                PointOutcome o = k < 0 ? null : outcomes.get(k);
+                views.add(new SessionSnapshot.CardPointView(p.id(), p.kind().key(), p.title(), states.get(i),
+                        o == null ? null : o.verdict(), o == null || o.operatorCall() == null ? null
+                        : o.operatorCall().call(), o == null ? List.of() : o.reasons()));
+            }
+        }
+        SessionSnapshot.ActivePoint ap = null;
+        if (active != null) {
+            List<SessionSnapshot.Gauge> gs = new ArrayList<>();
+            for (LiveGauge g : active.gauges) {
+                gs.add(g.view());
+            }
+            ap = new SessionSnapshot.ActivePoint(active.detection, active.cardId(), active.kind.key(), active.title(),
+                    active.beginNs, gs);
+        }
+        int from = Math.max(0, alarms.size() - RECENT_ALARMS);
+        snapshot = new SessionSnapshot(nowNs, card == null ? "" : card.sortie(), views, ap,
+                alarms.subList(from, alarms.size()), limits.raisedNow(), List.copyOf(notices), frames, ticks,
+                unplanned);
+    }
+
+    // ------------------------------------------------------------------------------------ the active point
+
+    /** The point being flown: its binding, hints and live gauges. */
+    private final class Active {
+        final long detection;
+        final ManoeuvreKind kind;
+        final TestPoint point;
+        final long beginNs;
+        final Map<String, Long> hints = new LinkedHashMap<>();
+        final List<LiveGauge> gauges = new ArrayList<>();
+
+        Active(PointEvent e, TestPoint point) {
+            this.detection = e.pointId();
+            this.kind = e.kind();
+            this.point = point;
+            this.beginNs = e.beginNs();
+            take(e);
+            if (point != null) {
+                for (int i = 0; i < point.bands().size(); i++) {
+                    gauges.add(new LiveGauge(point, i, beginNs));
+                }
+            }
+        }
+
+        void take(PointEvent e) {
+            for (KeyInstant k : e.keyInstants()) {
+                hints.put(k.name(), k.timeNs());
+            }
+        }
+
+        String cardId() {
+            return point == null ? null : point.id();
+        }
+
+        String title() {
+            return point == null ? kind.displayName() : point.title();
+        }
+    }
+
+    /** One band of the active point, gauged at every decision tick. */
+    private final class LiveGauge {
+        final TestPoint point;
+        final int index;
+        final Band band;
+        final boolean onParameter;
+        double valueSi = Double.NaN;
+        double margin = Double.NaN;
+        BandStatus status = BandStatus.WAITING;
+        BandStatus candidate = BandStatus.WAITING;
+        int candidateTicks;
+        double outsideS;
+
+        LiveGauge(TestPoint point, int index, long beginNs) {
+            this.point = point;
+            this.index = index;
+            this.band = point.bands().get(index);
+            this.onParameter = band.parameter() != null && history.has(band.parameter());
+            if (onParameter && band.phase() == BandPhase.ENTRY) {
+                valueSi = PhaseJudge.entryValue(history, band.parameter(), beginNs);
+                margin = PhaseJudge.marginFraction(band, valueSi);
+                status = BandStatus.ofMargin(margin);
+                candidate = status;
+            }
+        }
+
+        void update(long nowNs, double dtS) {
+            if (!onParameter || band.phase() == BandPhase.ENTRY || history.isEmpty()) {
+                return;
+            }
+            String p = band.parameter();
+            if (band.phase() == BandPhase.RATE) {
+                valueSi = PhaseJudge.slope(history, p, nowNs - Math.round(band.overS() * 1e9), nowNs);
+            } else {
+                double v = history.valueSi(p, history.size() - 1);
+                if (Double.isFinite(v)) {
+                    valueSi = v;
+                }
+            }
+            margin = PhaseJudge.marginFraction(band, valueSi);
+            if (band.phase() == BandPhase.INSTANT) {
+                return; // judged at its instant, once the point has ended
+            }
+            BandStatus now = BandStatus.ofMargin(margin);
+            if (now == BandStatus.OUT && band.phase() == BandPhase.THROUGHOUT) {
+                outsideS += dtS;
+            }
+            if (now == status) {
+                candidateTicks = 0;
+                return;
+            }
+            if (now != candidate) {
+                candidate = now;
+                candidateTicks = 0;
+            }
+            if (++candidateTicks >= STATUS_TICKS) {
+                BandStatus was = status;
+                status = now;
+                candidateTicks = 0;
+                emit(new SessionEvent.BandChanged(nowNs, point.id(), index, band.subject(), band.phase().key(), was,
+                        now, Double.isNaN(valueSi) ? null : band.unit().fromSi(valueSi), band.unit().symbol(),
+                        band.describe()));
+            }
+        }
+
+        SessionSnapshot.Gauge view() {
+            return new SessionSnapshot.Gauge(index, band.subject(), band.phase().key(), band.unit().symbol(),
+                    band.describe(), Double.isNaN(valueSi) ? Double.NaN : band.unit().fromSi(valueSi), margin,
+                    status, outsideS);
+        }
+    }
+
+    /** {@code 158 kt} for messages. */
+    static String describe(Band b, double si) {
+        return Numbers.scaled(b.unit().fromSi(si), PhaseJudge.widthInUnit(b)) + " " + b.unit().symbol();
+    }
+}

@@ -1,0 +1,213 @@
+package org.pointcall.ui.cli;
+
+import java.io.PrintWriter;
+import java.net.InetSocketAddress;
+import java.net.URI;
+import java.net.URISyntaxException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import java.util.concurrent.TimeUnit;
+
+import org.pointcall.ingest.pipeline.PacketPipeline;
+import org.pointcall.ingest.udp.UdpSource;
+import org.pointcall.ingest.udp.UdpSourceConfig;
+import org.pointcall.ingest.wire.DecoderOptions;
+import org.pointcall.ingest.wire.DictionaryRegistry;
+import org.pointcall.ingest.wire.FaultLog;
+import org.pointcall.ingest.wire.StreamFrameSink;
+import org.pointcall.ingest.frame.Frame;
+import org.pointcall.models.card.CardAnalysers;
+import org.pointcall.models.card.CardSession;
+import org.pointcall.models.card.SessionSetup;
+import org.pointcall.models.modelfile.LoadedModel;
+import org.pointcall.models.train.Classifier;
+import org.pointcall.shared.card.CardFiles;
+import org.pointcall.shared.card.TestCard;
+import org.pointcall.shared.demo.DemoFiles;
+import org.pointcall.shared.dictionary.DictionaryFiles;
+import org.pointcall.shared.dictionary.ParameterDictionary;
+import org.pointcall.shared.error.PointcallException;
+import org.pointcall.shared.outcome.PointsFile;
+import org.pointcall.shared.outcome.PointsFiles;
+import org.pointcall.shared.outcome.SessionEvent;
+
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** The live pipeline without a screen: telemetry over UDP, one line per event, the points files at the end. */
+@Command(name = "monitor",
+        header = "Follow a test card live over UDP; --headless prints one line per event.",
+        mixinStandardHelpOptions = true,
+        description = {
+            "Listens for pointcall wire-format telemetry, runs each stream through the live pipeline and the",
+            "card session (detector, card matching, live bands, safety limits, analysis, verdicts) and prints",
+            "one line per event: point begun, band status changed, point ended with its verdict, unplanned",
+            "manoeuvre, limit alarm. With --out, writes points.json and points.csv when it stops (after",
+            "--until-idle seconds without a datagram, or on Ctrl-C). The tool proposes; the team decides."
+        })
+public final class MonitorCommand implements Callable<Integer> {
+
+    @Option(names = "--headless", description = "no console: events as lines on standard output")
+    boolean headless;
+
+    @Option(names = "--listen", required = true, paramLabel = "udp://HOST:PORT", description = "where to listen")
+    String listen;
+
+    @Option(names = "--card", required = true, paramLabel = "CARD", description = "test card")
+    Path cardFile;
+
+    @Option(names = "--dictionary", paramLabel = "DICT",
+            description = "dictionary to check the card against before a stream announces its own (default: demo)")
+    Path dictionaryFile;
+
+    @Option(names = "--model", paramLabel = "MODEL", description = "detector model (default: the one in the jar)")
+    Path modelFile;
+
+    @Option(names = "--until-idle", paramLabel = "SECONDS",
+            description = "stop after this long without a datagram, once data has come")
+    Double untilIdleS;
+
+    @Option(names = "--out", paramLabel = "DIR", description = "folder for points.json and points.csv at the end")
+    Path out;
+
+    @Spec
+    CommandSpec spec;
+
+    /** The sessions of the streams heard so far; touched on the pipeline thread, read after it has stopped. */
+    private final Map<Integer, CardSession> sessions = new LinkedHashMap<>();
+
+    @Override
+    public Integer call() throws InterruptedException {
+        PrintWriter w = spec.commandLine().getOut();
+        if (!headless) {
+            throw new PointcallException("the console is not part of this command yet: give --headless");
+        }
+        if (untilIdleS != null && !(untilIdleS > 0)) {
+            throw new PointcallException("--until-idle must be a positive number of seconds, got " + untilIdleS);
+        }
+        InetSocketAddress bind = address(listen);
+        ParameterDictionary checkDict = dictionaryFile == null ? DemoFiles.dictionary()
+                : DictionaryFiles.load(dictionaryFile);
+        TestCard checked = AnalyzeCommand.loadCard(cardFile, checkDict);
+        LoadedModel<Classifier> model = DetectorModel.load(modelFile);
+        FaultLog faults = new FaultLog(line -> say(w, "fault: " + line), FaultLog.DEFAULT_MAX_LINES,
+                FaultLog.DEFAULT_WINDOW_NS);
+        StreamFrameSink sink = new StreamFrameSink() {
+            @Override
+            public void onFrame(int streamId, Frame frame, long receiveTimeNs) {
+                CardSession s = sessions.get(streamId);
+                if (s != null) {
+                    s.onFrame(frame);
+                }
+            }
+
+            @Override
+            public void onDictionary(int streamId, ParameterDictionary dictionary) {
+                CardSession old = sessions.remove(streamId);
+                if (old != null) {
+                    old.finish();
+                }
+                try {
+                    TestCard card = CardFiles.load(cardFile, dictionary);
+                    CardSession s = new CardSession(SessionSetup.of(dictionary, card, model.model(),
+                            model.metadata().description(), CardAnalysers.standard()), e -> say(w, line(e)));
+                    sessions.put(streamId, s);
+                    say(w, "stream " + streamId + ": dictionary '" + dictionary.name() + "', card " + card.sortie()
+                            + " (" + card.points().size() + " points)");
+                } catch (PointcallException | IllegalArgumentException e) {
+                    say(w, "stream " + streamId + " ignored: " + e.getMessage());
+                }
+            }
+        };
+        PacketPipeline pipeline = new PacketPipeline("monitor", new DictionaryRegistry(), DictionaryFiles::parse,
+                sink, DecoderOptions.DEFAULT, PacketPipeline.DEFAULT_QUEUE_PACKETS, faults, System::nanoTime);
+        UdpSource udp;
+        try {
+            udp = new UdpSource(new UdpSourceConfig(bind, UdpSourceConfig.DEFAULT_RECEIVE_BUFFER_BYTES, java.util.Set.of(), true), pipeline, faults, System::nanoTime);
+        } catch (RuntimeException e) {
+            throw new PointcallException("cannot listen on " + listen + ": " + e.getMessage(), e);
+        }
+        Thread stopper = new Thread(() -> stop(udp, pipeline, w), "monitor-stop");
+        Runtime.getRuntime().addShutdownHook(stopper);
+        pipeline.start();
+        udp.start();
+        say(w, "listening on udp://" + udp.localAddress().getHostString() + ":" + udp.localPort() + ", card "
+                + checked.sortie() + "; the tool proposes, the test team decides");
+        long lastCount = -1;
+        long lastChangeNs = System.nanoTime();
+        while (true) {
+            TimeUnit.MILLISECONDS.sleep(100);
+            long n = udp.datagrams();
+            long now = System.nanoTime();
+            if (n != lastCount) {
+                lastCount = n;
+                lastChangeNs = now;
+            } else if (untilIdleS != null && n > 0 && now - lastChangeNs > untilIdleS * 1e9) {
+                break;
+            }
+        }
+        Runtime.getRuntime().removeShutdownHook(stopper);
+        stop(udp, pipeline, w);
+        return 0;
+    }
+
+    private boolean stopped;
+
+    /** Stops the receiver, drains the pipeline, finishes every session and writes the points files. */
+    private synchronized void stop(UdpSource udp, PacketPipeline pipeline, PrintWriter w) {
+        if (stopped) {
+            return;
+        }
+        stopped = true;
+        udp.stop();
+        pipeline.close(); // joins the pipeline thread: the sessions are ours from here
+        List<PointsFile> files = new ArrayList<>();
+        for (Map.Entry<Integer, CardSession> e : sessions.entrySet()) {
+            CardSession s = e.getValue();
+            s.finish();
+            files.add(s.pointsFile("udp stream " + e.getKey() + " on " + listen));
+        }
+        say(w, "stopped: " + udp.datagrams() + " datagrams, " + sessions.values().stream()
+                .mapToLong(CardSession::frames).sum() + " frames");
+        if (out != null) {
+            for (int i = 0; i < files.size(); i++) {
+                Path dir = files.size() == 1 ? out : out.resolve("stream-" + sessions.keySet().toArray()[i]);
+                List<Path> written = PointsFiles.write(dir, files.get(i));
+                say(w, "wrote: " + written.get(0) + ", " + written.get(1));
+            }
+            if (files.isEmpty()) {
+                say(w, "no stream was heard: no points files written");
+            }
+        }
+    }
+
+    static String line(SessionEvent e) {
+        return e.line();
+    }
+
+    private static void say(PrintWriter w, String line) {
+        synchronized (w) {
+            w.println(line);
+            w.flush();
+        }
+    }
+
+    static InetSocketAddress address(String uri) {
+        String form = "--listen must look like udp://HOST:PORT, got '" + uri + "'";
+        try {
+            URI u = new URI(uri);
+            if (!"udp".equals(u.getScheme()) || u.getHost() == null || u.getPort() < 0) {
+                throw new PointcallException(form);
+            }
+            return new InetSocketAddress(u.getHost(), u.getPort());
+        } catch (URISyntaxException e) {
+            throw new PointcallException(form);
+        }
+    }
+}
