@@ -23,7 +23,14 @@ import org.pointcall.shared.error.PointcallException;
 import org.pointcall.ui.console.ConsoleApp;
 import org.pointcall.ui.console.ConsoleSetup;
 import org.pointcall.ui.console.TraceDrawing;
-import org.pointcall.ui.demo.CardListing;
+import org.pointcall.ui.demo.SessionDesk;
+import org.pointcall.models.card.CardAnalysers;
+import org.pointcall.models.card.CardSession;
+import org.pointcall.models.card.SessionSetup;
+import org.pointcall.models.modelfile.LoadedModel;
+import org.pointcall.models.train.Classifier;
+import org.pointcall.replay.record.Recorder;
+import org.pointcall.replay.record.RecorderPolicy;
 import org.pointcall.ui.demo.LiveConsole;
 import org.pointcall.ui.desk.DeskSnapshot;
 import org.pointcall.ui.desk.LogEntry;
@@ -65,6 +72,13 @@ public final class DemoCommand implements Callable<Integer> {
     @Option(names = "--headless", description = "no window, even with a display")
     boolean headless;
 
+    @Option(names = "--record", paramLabel = "DIR", defaultValue = "sorties",
+            description = "folder for the sortie archive (default: ${DEFAULT-VALUE})")
+    Path recordDir;
+
+    @Option(names = "--no-record", description = "do not record the sortie")
+    boolean noRecord;
+
     @Spec
     CommandSpec spec;
 
@@ -89,8 +103,19 @@ public final class DemoCommand implements Callable<Integer> {
         ParameterDictionary dict = DemoFiles.dictionary();
         TestCard card = DemoFiles.card();
         List<String> faults = java.util.Collections.synchronizedList(new ArrayList<>());
-        try (LiveConsole live = new LiveConsole(0, dict, settings, new CardListing(card), List.of(), faults::add)) {
+        LoadedModel<Classifier> model = DetectorModel.load(null);
+        SessionDesk desk = new SessionDesk(card, dict);
+        Recorder recorder = noRecord ? null : Recorder.startIn(recordDir, RecorderPolicy.DEFAULT, System::nanoTime,
+                a -> faults.add("recorder: " + a));
+        try (LiveConsole live = new LiveConsole(0, dict, settings, desk,
+                (d, listener) -> new CardSession(SessionSetup.of(d, card, model.model(), model.metadata().description(),
+                        CardAnalysers.standard()), listener),
+                recorder == null ? null : recorder::tee, faults::add)) {
             live.start();
+            if (recorder != null) {
+                out.println("recording: " + recorder.file());
+                out.flush();
+            }
             java.util.concurrent.atomic.AtomicBoolean stop = new java.util.concurrent.atomic.AtomicBoolean();
             Thread sim = simulator(live.rig().port(), dict, card, err, stop);
             sim.start();
@@ -107,6 +132,13 @@ public final class DemoCommand implements Callable<Integer> {
             }
             stop.set(true);
             sim.join(5000);
+        } finally {
+            if (recorder != null) {
+                recorder.close();
+            }
+        }
+        for (String f : faults) {
+            err.println("demo: " + f);
         }
         out.flush();
         return 0;
