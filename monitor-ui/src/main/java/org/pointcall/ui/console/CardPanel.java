@@ -49,6 +49,7 @@ final class CardPanel {
             box.getStyleClass().add("card-row");
             box.setId("card-row-" + r.pointId());
             word.setId("card-state-" + r.pointId());
+            title.setId("card-row-" + r.pointId() + "-title");
             set(r);
         }
 
