@@ -138,6 +138,15 @@ public final class ConsoleView {
         return charts.redraws();
     }
 
+    /** ChartFX renders of each lane so far. */
+    public long[] laneRenders() {
+        long[] r = new long[charts.lanes().size()];
+        for (int i = 0; i < r.length; i++) {
+            r[i] = charts.lanes().get(i).redraws();
+        }
+        return r;
+    }
+
     /** Times the pump rewrote the charts' data. */
     public long pumpRedraws() {
         return pumpRedraws;

@@ -179,7 +179,8 @@ final class LaneChart {
         xAxis.set(from, nowS);
         int n;
         if (feed == TraceDrawing.ENVELOPE) {
-            int columns = Math.max(64, (int) Math.ceil(Math.max(chart.getWidth(), 200)));
+            // a min/max pair every two pixels keeps every excursion a line of this width can show
+            int columns = Math.max(64, (int) Math.ceil(Math.max(chart.getWidth(), 200) / 2));
             ensure(2 * columns);
             n = history.envelope(from, nowS, columns, x, y);
         } else {

@@ -107,6 +107,11 @@ public final class LiveRig implements AutoCloseable {
         return pipeline;
     }
 
+    /** Waits until what was received has gone through the pipeline (at most {@code timeoutNs}). */
+    public boolean awaitDrained(long timeoutNs) {
+        return pipeline.awaitDrained(timeoutNs);
+    }
+
     /** Datagrams taken from the socket so far. */
     public long datagrams() {
         return udp.datagrams();
