@@ -35,6 +35,7 @@ import picocli.CommandLine.Command;
             NextCardCommand.class,
             BenchCommand.class,
             DemoCommand.class,
+            ConsoleCommand.class,
             CommandLine.HelpCommand.class
         })
 public final class PointcallCommand implements Runnable {

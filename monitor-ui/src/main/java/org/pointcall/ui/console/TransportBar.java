@@ -100,7 +100,7 @@ final class TransportBar {
         long p = (long) t.positionS();
         long l = (long) t.lengthS();
         position.setText(String.format(Locale.ROOT, "%02d:%02d / %02d:%02d  %s", p / 60, p % 60, l / 60, l % 60,
-                t.playing() ? "playing" : "PAUSED"));
+                t.playing() ? "playing" : t.positionS() >= t.lengthS() - 0.05 && t.lengthS() > 0 ? "ENDED" : "PAUSED"));
         if (!slider.isValueChanging()) {
             updating = true;
             slider.setMax(Math.max(1, t.lengthS()));

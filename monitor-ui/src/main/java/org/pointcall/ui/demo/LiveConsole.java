@@ -46,6 +46,13 @@ public final class LiveConsole implements AutoCloseable {
     public LiveConsole(int port, ParameterDictionary dictionary, ConsoleSettings settings, SessionDesk desk,
                        SessionFactory sessions, Function<DatagramHandler, DatagramHandler> tee,
                        Consumer<String> faults) {
+        this(port, dictionary, settings, desk, sessions, tee, faults, true);
+    }
+
+    /** @param live false for a replay fed into the pipeline (no arrival latency) */
+    public LiveConsole(int port, ParameterDictionary dictionary, ConsoleSettings settings, SessionDesk desk,
+                       SessionFactory sessions, Function<DatagramHandler, DatagramHandler> tee,
+                       Consumer<String> faults, boolean live) {
         this.desk = desk;
         List<String> charted = new ArrayList<>();
         for (String p : settings.chartedParameters()) {
@@ -71,7 +78,7 @@ public final class LiveConsole implements AutoCloseable {
                     x.onFrame(f);
                 }
             };
-        }, tee, faults);
+        }, tee, faults, live);
         publisher = new DeskPublisher(link, desk, new HealthReader(rig.meters()), clock::timeCs);
     }
 

@@ -50,6 +50,15 @@ public final class LiveRig implements AutoCloseable {
      */
     public LiveRig(int port, StreamHost host, java.util.function.Function<DatagramHandler, DatagramHandler> tee,
                    Consumer<String> faults) {
+        this(port, host, tee, faults, true);
+    }
+
+    /**
+     * @param arrivalClock receive times are this machine's {@code System.nanoTime} (live); false for a replay fed
+     *                     straight into the pipeline with archive times, where latency means nothing
+     */
+    public LiveRig(int port, StreamHost host, java.util.function.Function<DatagramHandler, DatagramHandler> tee,
+                   Consumer<String> faults, boolean arrivalClock) {
         FaultLog log = new FaultLog(faults, FaultLog.DEFAULT_MAX_LINES, FaultLog.DEFAULT_WINDOW_NS);
         Timer latency = IngestMetrics.latencyTimer(meters, SOURCE);
         StreamFrameSink sink = new StreamFrameSink() {
@@ -76,7 +85,9 @@ public final class LiveRig implements AutoCloseable {
                 for (int i = 0; i < ids.length; i++) {
                     if (ids[i] == streamId) {
                         sinks[i].onFrame(frame);
-                        latency.record(System.nanoTime() - receiveTimeNs, TimeUnit.NANOSECONDS);
+                        if (arrivalClock) {
+                            latency.record(System.nanoTime() - receiveTimeNs, TimeUnit.NANOSECONDS);
+                        }
                         return;
                     }
                 }

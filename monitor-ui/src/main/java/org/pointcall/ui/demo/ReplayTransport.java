@@ -23,7 +23,7 @@ public final class ReplayTransport implements SessionDesk.TransportSide {
     /**
      * @param startNs     data time of the recording's first packet
      * @param lengthS     length of the recording, s
-     * @param pointBeginS data time (s, same clock as the packets) a point began, or null when not known
+     * @param pointBeginS archive time (s, the packets' clock) at which a point began, or null when not known
      */
     public ReplayTransport(ReplayControl control, long startNs, double lengthS, Function<String, Double> pointBeginS) {
         this.control = control;
@@ -57,7 +57,7 @@ public final class ReplayTransport implements SessionDesk.TransportSide {
             if (begin == null) {
                 throw new IllegalArgumentException("point " + j.pointId() + " has not been seen in this replay yet");
             }
-            control.seek(Math.round(Math.max(startNs / 1e9, begin - JUMP_LEAD_S) * 1e9));
+            control.seek(Math.max(startNs, Math.round((begin - JUMP_LEAD_S) * 1e9)));
         }
     }
 }
