@@ -55,6 +55,9 @@ public final class DemoCommand implements Callable<Integer> {
     @Option(names = "--speed", defaultValue = "4", description = "data time per wall time (default: ${DEFAULT-VALUE})")
     double speed;
 
+    @Option(names = "--card", paramLabel = "CARD", description = "fly this card instead of the demo card")
+    Path cardFile;
+
     @Option(names = "--seed", defaultValue = "1", description = "simulator seed (default: ${DEFAULT-VALUE})")
     long seed;
 
@@ -101,7 +104,7 @@ public final class DemoCommand implements Callable<Integer> {
             err.println("demo: " + p);
         }
         ParameterDictionary dict = DemoFiles.dictionary();
-        TestCard card = DemoFiles.card();
+        TestCard card = cardFile == null ? DemoFiles.card() : AnalyzeCommand.loadCard(cardFile, dict);
         List<String> faults = java.util.Collections.synchronizedList(new ArrayList<>());
         LoadedModel<Classifier> model = DetectorModel.load(null);
         SessionDesk desk = new SessionDesk(card, dict);

@@ -28,7 +28,8 @@ final class AlarmStrip {
         SVGPath octagon = new SVGPath();
         octagon.setContent("M7 0 L17 0 L24 7 L24 17 L17 24 L7 24 L0 17 L0 7 Z M10.5 4 L13.5 4 L13 14 L11 14 Z "
                 + "M10.5 17 L13.5 17 L13.5 20 L10.5 20 Z");
-        octagon.setStyle("-fx-fill: #ffd9d4; -fx-fill-rule: evenodd;");
+        octagon.setStyle("-fx-fill: #ffd9d4;");
+        octagon.setFillRule(javafx.scene.shape.FillRule.EVEN_ODD);
         text.setId("alarm-text");
         count.setId("alarm-count");
         ack.setId("alarm-ack");
@@ -82,7 +83,7 @@ final class AlarmStrip {
         long t = (long) Math.max(0, Math.floor(shown.timeS()));
         text.setText(String.format(Locale.ROOT, "LIMIT  %s  (T+%02d:%02d:%02d)%s", shown.text(), t / 3600,
                 (t / 60) % 60, t % 60, shown.active() ? "" : "  \u2014 back inside"));
-        count.setText(waiting > 1 ? waiting + " to acknowledge" : waiting == 1 ? "acknowledge" : "acknowledged");
+        count.setText(waiting > 0 ? waiting + " to acknowledge" : "acknowledged");
         ack.setVisible(unacked != null);
     }
 }

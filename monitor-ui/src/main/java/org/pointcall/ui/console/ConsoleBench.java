@@ -41,7 +41,7 @@ import org.pointcall.ui.trace.TraceTap;
 public final class ConsoleBench extends Application {
     /** What one phase measured. */
     public record Phase(String name, double rendersPerSecondPerChart, double minRendersPerSecond, double screenCores,
-                        double seconds) {
+                        double fxThreadCores, double seconds) {
     }
 
     /** The run's figures. */
@@ -52,8 +52,8 @@ public final class ConsoleBench extends Application {
             for (Phase p : List.of(console, baseline)) {
                 out.add(String.format(Locale.ROOT, "%s.renders: %.1f per second per chart (slowest chart %.1f)",
                         p.name(), p.rendersPerSecondPerChart(), p.minRendersPerSecond()));
-                out.add(String.format(Locale.ROOT, "%s.screen.cpu: %.2f cores (JavaFX threads)", p.name(),
-                        p.screenCores()));
+                out.add(String.format(Locale.ROOT, "%s.screen.cpu: %.2f cores (JavaFX threads; %.2f of it the "
+                        + "application thread)", p.name(), p.screenCores(), p.fxThreadCores()));
             }
             out.add(String.format(Locale.ROOT, "ratio.renders: %.2f (console / plain)",
                     console.rendersPerSecondPerChart() / baseline.rendersPerSecondPerChart()));
@@ -145,12 +145,14 @@ public final class ConsoleBench extends Application {
         Thread.sleep((long) (warmS * 1000));
         long[][] r0 = new long[1][];
         onFx(() -> r0[0] = view.get().laneRenders());
-        long c0 = fxCpuNs();
+        long c0 = fxCpuNs(false);
+        long a0 = fxCpuNs(true);
         long t0 = System.nanoTime();
         Thread.sleep((long) (measureS * 1000));
         long[][] r1 = new long[1][];
         onFx(() -> r1[0] = view.get().laneRenders());
-        long c1 = fxCpuNs();
+        long c1 = fxCpuNs(false);
+        long a1 = fxCpuNs(true);
         long t1 = System.nanoTime();
         onFx(() -> view.get().stop());
         double secs = (t1 - t0) / 1e9;
@@ -161,7 +163,8 @@ public final class ConsoleBench extends Application {
             total += d;
             min = Math.min(min, d);
         }
-        return new Phase(name, total / (double) r1[0].length / secs, min / secs, (c1 - c0) / 1e9 / secs, secs);
+        return new Phase(name, total / (double) r1[0].length / secs, min / secs, (c1 - c0) / 1e9 / secs,
+                (a1 - a0) / 1e9 / secs, secs);
     }
 
     private static void onFx(Runnable r) throws Exception {
@@ -185,7 +188,7 @@ public final class ConsoleBench extends Application {
     }
 
     /** CPU time of the JavaFX application thread and the render threads. */
-    private static long fxCpuNs() {
+    private static long fxCpuNs(boolean applicationThreadOnly) {
         ThreadMXBean mx = ManagementFactory.getThreadMXBean();
         long sum = 0;
         for (ThreadInfo ti : mx.getThreadInfo(mx.getAllThreadIds())) {
@@ -193,7 +196,9 @@ public final class ConsoleBench extends Application {
                 continue;
             }
             String n = ti.getThreadName();
-            if (n.startsWith("JavaFX") || n.startsWith("QuantumRenderer") || n.startsWith("Prism")) {
+            boolean app = n.equals("JavaFX Application Thread");
+            if (app || (!applicationThreadOnly
+                    && (n.startsWith("JavaFX") || n.startsWith("QuantumRenderer") || n.startsWith("Prism")))) {
                 long c = mx.getThreadCpuTime(ti.getThreadId());
                 if (c > 0) {
                     sum += c;

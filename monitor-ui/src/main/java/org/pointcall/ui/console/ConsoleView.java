@@ -184,7 +184,7 @@ public final class ConsoleView {
         alarms.show(s.alarms());
         card.show(s.card());
         point.show(s.active());
-        verdict.show(s.verdict());
+        verdict.show(s.verdict(), s.active() != null);
         log.show(s.log());
         charts.showPoint(s.active(), s.spans(), settings.spanS());
         transport.show(s.transport());

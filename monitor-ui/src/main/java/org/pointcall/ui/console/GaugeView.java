@@ -97,21 +97,32 @@ final class GaugeView {
         }
         pointer.getStyleClass().remove("outside");
         state.getStyleClass().removeAll("inside", "outside", "pending");
-        if (!g.known()) {
-            pointer.setVisible(false);
-            state.setText("\u2013 no value");
-            state.getStyleClass().add("pending");
-        } else {
-            pointer.setVisible(true);
+        pointer.setVisible(g.known());
+        if (g.known()) {
             double vx = Math.max(0, Math.min(W, px(g.value(), sMin, sMax)));
             if (g.inside()) {
                 pointer.getPoints().setAll(vx, H / 2 - 1, vx - 5, -1.0, vx + 5, -1.0);
-                state.setText((g.judged() ? "HELD" : "IN") + " \u25cf");
-                state.getStyleClass().add("inside");
             } else {
                 pointer.getPoints().setAll(vx, H, vx - 6, 0.0, vx, 4.0, vx + 6, 0.0);
                 pointer.getStyleClass().add("outside");
-                state.setText((g.judged() ? "MISSED" : "OUT") + " \u25b2");
+            }
+        }
+        // words and shapes from the session's own reading of the band, not from the pointer
+        switch (g.standing()) {
+            case WAITING -> {
+                state.setText(g.known() ? "WAIT \u25cb" : "\u2013 no value");
+                state.getStyleClass().add("pending");
+            }
+            case CLEAR -> {
+                state.setText("IN \u25cf");
+                state.getStyleClass().add("inside");
+            }
+            case MARGINAL -> {
+                state.setText("EDGE \u25c6");
+                state.getStyleClass().add("outside");
+            }
+            case OUT -> {
+                state.setText("OUT \u25b2");
                 state.getStyleClass().add("outside");
             }
         }

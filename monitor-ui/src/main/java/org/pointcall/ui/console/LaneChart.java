@@ -80,7 +80,7 @@ final class LaneChart {
         r.setPointReduction(false);
         r.setParallelImplementation(false);
         data = new DoubleDataSet(parameter, 4096);
-        data.setStyle("-fx-line-color: " + COLOURS[colour % COLOURS.length] + "; -fx-line-width: 1.4;");
+        data.setStyle("-fx-line-color: " + COLOURS[colour % COLOURS.length] + "; -fx-line-width: 1.0;");
         r.getDatasets().add(data);
         chart = new XYChart(xAxis, yAxis);
         chart.getRenderers().setAll(r);
@@ -127,6 +127,8 @@ final class LaneChart {
         xAxis.getStyleClass().add("quiet-axis");
         xAxis.setPrefHeight(6);
         xAxis.setMaxHeight(6);
+        // nothing to draw on it: an invisible axis costs the software renderer nothing per frame
+        xAxis.setVisible(false);
     }
 
     /** The ErrorDataSetRenderer, counting the renders ChartFX really does (for the benchmark). */
@@ -180,7 +182,7 @@ final class LaneChart {
         int n;
         if (feed == TraceDrawing.ENVELOPE) {
             // a min/max pair every two pixels keeps every excursion a line of this width can show
-            int columns = Math.max(64, (int) Math.ceil(Math.max(chart.getWidth(), 200) / 2));
+            int columns = Math.max(64, (int) Math.ceil(Math.max(chart.getWidth(), 200) / 4));
             ensure(2 * columns);
             n = history.envelope(from, nowS, columns, x, y);
         } else {
@@ -238,6 +240,7 @@ final class LaneChart {
         }
         bandShown = b;
         insideShown = null;
+        side.getStyleClass().removeAll("inside", "outside");
         if (b != null) {
             double lo = Double.isInfinite(b.low()) ? -1e12 : b.low();
             double hi = Double.isInfinite(b.high()) ? 1e12 : b.high();

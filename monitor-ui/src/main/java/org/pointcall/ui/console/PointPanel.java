@@ -23,6 +23,7 @@ final class PointPanel {
     private final Label config = new Label("");
     private final Label elapsed = new Label("--");
     private final Label hold = new Label("--");
+    private final Label holdLabel = new Label("in band");
     private final VBox gauges = new VBox(2);
     private final List<GaugeView> gaugeViews = new ArrayList<>();
     private String pointShown;
@@ -48,7 +49,7 @@ final class PointPanel {
         hold.setId("active-hold");
         Label el = new Label("elapsed");
         el.getStyleClass().add("dim");
-        Label ho = new Label("hold");
+        Label ho = holdLabel;
         ho.getStyleClass().add("dim");
         HBox clocks = new HBox(18, new VBox(0, el, elapsed), new VBox(0, ho, hold));
         gauges.setId("gauges");
@@ -114,6 +115,7 @@ final class PointPanel {
             }
         }
         elapsed.setText(String.format(Locale.ROOT, "%5.1f s", p.elapsedS()));
+        holdLabel.setText(p.holdRequiredS() > 0 ? "hold" : "in band");
         hold.setText(p.holdRequiredS() > 0
                 ? String.format(Locale.ROOT, "%4.1f / %.0f s", p.holdS(), p.holdRequiredS())
                 : String.format(Locale.ROOT, "%4.1f s", p.holdS()));

@@ -23,6 +23,7 @@ final class VerdictOverlay {
     private final VBox reasons = new VBox(3);
     private final SVGPath mark;
     private VerdictCard shown;
+    private final StackPane markBox;
 
     VerdictOverlay() {
         word.getStyleClass().add("verdict-word");
@@ -33,7 +34,7 @@ final class VerdictOverlay {
         mark = Marks.of(org.pointcall.ui.desk.PointMark.GOOD, 12);
         mark.setScaleX(5);
         mark.setScaleY(5);
-        StackPane markBox = new StackPane(mark);
+        markBox = new StackPane(mark);
         markBox.setMinSize(80, 80);
         HBox top = new HBox(24, markBox, new VBox(0, word, point));
         top.setAlignment(Pos.CENTER_LEFT);
@@ -41,7 +42,7 @@ final class VerdictOverlay {
         how.getStyleClass().add("dim");
         box = new VBox(10, top, reasons, how);
         box.getStyleClass().add("verdict-box");
-        box.setMaxSize(720, 360);
+        box.setMaxSize(720, javafx.scene.layout.Region.USE_PREF_SIZE);
         box.setId("verdict-box");
         node = new StackPane(box);
         node.setAlignment(Pos.CENTER);
@@ -54,10 +55,24 @@ final class VerdictOverlay {
         return node;
     }
 
-    /** Shows an unacknowledged verdict, hides otherwise. */
-    void show(VerdictCard v) {
+    /**
+     * Shows an unacknowledged verdict, hides otherwise. While the next point is flown it stays, but compact and
+     * at the top, so that the charts of the new point stay readable.
+     */
+    void show(VerdictCard v, boolean compact) {
         boolean visible = v != null && !v.acknowledged();
         node.setVisible(visible);
+        if (compact != box.getStyleClass().contains("compact")) {
+            if (compact) {
+                box.getStyleClass().add("compact");
+            } else {
+                box.getStyleClass().remove("compact");
+            }
+            node.setAlignment(compact ? Pos.TOP_CENTER : Pos.CENTER);
+            mark.setScaleX(compact ? 2.5 : 5);
+            mark.setScaleY(compact ? 2.5 : 5);
+            markBox.setMinSize(compact ? 40 : 80, compact ? 40 : 80);
+        }
         if (!visible || v.equals(shown)) {
             return;
         }
@@ -68,6 +83,7 @@ final class VerdictOverlay {
         word.setText(v.outcome().name());
         point.setText("point " + v.pointId());
         Marks.restyle(mark, v.outcome().mark());
+        mark.setFillRule(javafx.scene.shape.FillRule.EVEN_ODD);
         mark.getStyleClass().add("mark-big");
         reasons.getChildren().clear();
         if (v.reasons().isEmpty()) {

@@ -253,7 +253,7 @@ public final class SessionDesk implements DeskModel, SessionListener {
             double target = b != null && b.isTarget() ? b.unit().fromSi(b.targetSi()) : Double.NaN;
             double margin = Double.isFinite(high - low) ? g.marginFraction() * (high - low) : Double.NaN;
             gauges.add(new BandGauge(g.subject(), g.phase(), g.band(), g.unit(), low, high, target, g.value(),
-                    margin, Math.max(0, g.outsideS()), false));
+                    margin, Math.max(0, g.outsideS()), standing(g.status())));
             if (b != null && b.parameter() != null && (b.phase() == BandPhase.ENTRY || b.phase() == BandPhase.THROUGHOUT)) {
                 int slot = dictionary.indexOf(b.parameter());
                 if (slot >= 0) {
@@ -274,6 +274,15 @@ public final class SessionDesk implements DeskModel, SessionListener {
         String id = label(a.cardId(), a.kind());
         return new ActivePoint(id, a.title() == null ? a.kind() : a.title(), tp == null ? "" : tp.config(), elapsed,
                 Math.max(0, elapsed - worstThroughoutOutS), hold, gauges, traceBands);
+    }
+
+    private static BandGauge.Standing standing(org.pointcall.shared.outcome.BandStatus s) {
+        return switch (s) {
+            case WAITING -> BandGauge.Standing.WAITING;
+            case CLEAR -> BandGauge.Standing.CLEAR;
+            case MARGINAL -> BandGauge.Standing.MARGINAL;
+            case OUT -> BandGauge.Standing.OUT;
+        };
     }
 
     private static double display(Band b, double si) {

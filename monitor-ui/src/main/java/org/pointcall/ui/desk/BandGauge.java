@@ -15,10 +15,13 @@ import java.util.Objects;
  * @param value      current (or judged) value, NaN when not known yet
  * @param marginToEdge distance to the nearer edge, positive inside, negative outside; NaN when unknown
  * @param outsideS   time spent outside so far, seconds
- * @param judged     the value is final (instant passed, result computed)
+ * @param standing   where the session says the band stands
  */
 public record BandGauge(String subject, String phase, String text, String unit, double low, double high,
-                        double target, double value, double marginToEdge, double outsideS, boolean judged) {
+                        double target, double value, double marginToEdge, double outsideS, Standing standing) {
+    /** The session's reading of a band. */
+    public enum Standing { WAITING, CLEAR, MARGINAL, OUT }
+
     public BandGauge {
         Objects.requireNonNull(subject, "subject");
         phase = phase == null ? "" : phase;
@@ -27,6 +30,7 @@ public record BandGauge(String subject, String phase, String text, String unit, 
         if (!(low < high)) {
             throw new IllegalArgumentException("band on " + subject + " needs low < high, got " + low + ", " + high);
         }
+        java.util.Objects.requireNonNull(standing, "standing");
         if (!(outsideS >= 0)) {
             throw new IllegalArgumentException("time outside must be >= 0 s, got " + outsideS);
         }

@@ -21,7 +21,6 @@ import javafx.stage.Stage;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.ExtendWith;
-import org.junit.jupiter.api.io.TempDir;
 import org.pointcall.ingest.frame.Frame;
 import org.pointcall.ingest.sim.SortieSimulator;
 import org.pointcall.ingest.sim.airframe.Airframes;
@@ -147,6 +146,15 @@ class ConsoleViewTest {
         publisher.publishOnce(System.nanoTime());
     }
 
+    /** With -Dpointcall.test.screenshots=DIR, keeps a PNG of the screen for a person to look at. */
+    private void shoot(String name) throws Exception {
+        String d = System.getProperty("pointcall.test.screenshots");
+        if (d != null && !d.isBlank()) {
+            WaitForAsyncUtils.asyncFx(() -> ConsoleView.savePng(view.root().getScene(), Path.of(d, name)))
+                    .get(10, TimeUnit.SECONDS);
+        }
+    }
+
     @Test
     void arrowKeysThenAArmTheSelectedPointAndTheCardShowsItPrimed(FxRobot robot) throws Exception {
         waitUntil(() -> text(robot, "card-state-ST-1").startsWith("WAITING"));
@@ -198,8 +206,9 @@ class ConsoleViewTest {
                 "the session raised the alarm");
         waitUntil(() -> robot.lookup("#alarm-strip").query().isVisible());
         assertTrue(text(robot, "alarm-text").contains("Nz"), text(robot, "alarm-text"));
-        assertEquals("acknowledge", text(robot, "alarm-count"));
+        assertEquals("1 to acknowledge", text(robot, "alarm-count"));
         assertFalse(robot.lookup("#alarm-strip").query().getStyleClass().contains("seen"));
+        shoot("console-alarm.png");
 
         robot.type(KeyCode.K);
         waitUntil(() -> link.sentCount() == 1);
