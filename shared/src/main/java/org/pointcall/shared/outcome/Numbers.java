@@ -18,7 +18,7 @@ public final class Numbers {
         return plain(value, decimals);
     }
 
-    /** {@code value} with {@code digits} significant digits, no exponent, no trailing zeros. */
+    /** {@code value} with at most {@code digits} significant digits, no exponent, no trailing zeros. */
     public static String near(double value, int digits) {
         if (!Double.isFinite(value)) {
             return Double.toString(value);
@@ -27,7 +27,8 @@ public final class Numbers {
             return "0";
         }
         int decimals = (int) Math.max(0, Math.min(9, digits - 1 - Math.floor(Math.log10(Math.abs(value)))));
-        return plain(value, decimals);
+        String s = plain(value, decimals);
+        return s.indexOf('.') < 0 ? s : s.replaceAll("0+$", "").replaceAll("\\.$", "");
     }
 
     private static String plain(double value, int decimals) {

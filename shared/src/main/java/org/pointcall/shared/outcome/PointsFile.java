@@ -1,7 +1,6 @@
 package org.pointcall.shared.outcome;
 
 import java.util.List;
-import java.util.Objects;
 
 /**
  * What {@code analyze} and a headless monitor write at the end: every flown point, every limit alarm and the card
@@ -21,13 +20,13 @@ public record PointsFile(String format, String source, String sortie, String air
     public static final String FORMAT = "pointcall-points/1";
 
     public PointsFile {
-        Objects.requireNonNull(format, "format");
+        format = format == null ? "" : format;
         source = source == null ? "" : source;
         sortie = sortie == null ? "" : sortie;
         airframe = airframe == null ? "" : airframe;
-        points = List.copyOf(points);
-        alarms = List.copyOf(alarms);
-        notFlown = List.copyOf(notFlown);
+        points = points == null ? List.of() : List.copyOf(points);
+        alarms = alarms == null ? List.of() : List.copyOf(alarms);
+        notFlown = notFlown == null ? List.of() : List.copyOf(notFlown);
     }
 
     public static PointsFile of(String source, String sortie, String airframe, List<PointOutcome> points,

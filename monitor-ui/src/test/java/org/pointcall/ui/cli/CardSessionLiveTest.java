@@ -1,0 +1,170 @@
+package org.pointcall.ui.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertNull;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.CopyOnWriteArrayList;
+import java.util.concurrent.atomic.AtomicBoolean;
+import java.util.concurrent.atomic.AtomicReference;
+
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.pointcall.ingest.frame.Frame;
+import org.pointcall.ingest.sim.SortieSimulator;
+import org.pointcall.ingest.sim.airframe.Airframes;
+import org.pointcall.ingest.sim.pilot.PilotSettings;
+import org.pointcall.ingest.sim.sensor.SensorSettings;
+import org.pointcall.models.card.CardAnalysers;
+import org.pointcall.models.card.CardPointState;
+import org.pointcall.models.card.CardSession;
+import org.pointcall.models.card.SessionSetup;
+import org.pointcall.models.card.SessionSnapshot;
+import org.pointcall.models.modelfile.LoadedModel;
+import org.pointcall.models.train.Classifier;
+import org.pointcall.shared.card.CardFiles;
+import org.pointcall.shared.card.TestCard;
+import org.pointcall.shared.demo.DemoFiles;
+import org.pointcall.shared.dictionary.ParameterDictionary;
+import org.pointcall.shared.outcome.BandStatus;
+import org.pointcall.shared.outcome.PointOutcome;
+import org.pointcall.shared.outcome.SessionEvent;
+import org.pointcall.shared.outcome.Verdict;
+
+/**
+ * The card session as a console drives it: frames from a simulated sortie on one thread; arming, the engineer's
+ * call and snapshot reads from others. The pilot flies a stall and a loop; the session's card has two loops and
+ * no stall, and a 3.5 g limit the 4 g loop breaks.
+ */
+class CardSessionLiveTest {
+    private static final ParameterDictionary DICT = DemoFiles.dictionary();
+    private static final String LOOP_BANDS = String.join("\n",
+            "    bands:",
+            "      - {parameter: KCAS, phase: entry, target: 320, tol: 10, unit: kt}",
+            "      - {parameter: Hp, phase: entry, target: 8000, tol: 300, unit: ft}",
+            "");
+    private static final TestCard FLOWN = CardFiles.parse(String.join("\n",
+            "sortie: T-9", "airframe: veskarn-02", "points:",
+            "  - {id: SL-1, kind: stall-level, title: Stall}",
+            "  - id: LP-1", "    kind: loop", "    title: Loop", LOOP_BANDS), "flown.yaml", DICT);
+    private static final TestCard SESSION = CardFiles.parse(String.join("\n",
+            "sortie: T-9", "airframe: veskarn-02", "limits:", "  - {parameter: Nz, max: 3.5, unit: g}", "points:",
+            "  - id: LP-A", "    kind: loop", "    title: First loop", LOOP_BANDS,
+            "  - id: LP-B", "    kind: loop", "    title: Second loop", LOOP_BANDS), "session.yaml", DICT);
+
+    static final List<Frame> FRAMES = new ArrayList<>();
+    static LoadedModel<Classifier> model;
+
+    @BeforeAll
+    static void fly() {
+        model = DetectorModel.load(null);
+        new SortieSimulator(Airframes.load("veskarn-02"), FLOWN, DICT, 21, 64, SensorSettings.DEFAULT,
+                PilotSettings.NO_FLAWS).run(List.of(f -> FRAMES.add(f.copy())));
+    }
+
+    private static CardSession session(List<SessionEvent> events) {
+        return new CardSession(SessionSetup.of(DICT, SESSION, model.model(), model.metadata().description(),
+                CardAnalysers.standard()), events::add);
+    }
+
+    private static void onOtherThread(Runnable r) throws InterruptedException {
+        Thread t = new Thread(r);
+        t.start();
+        t.join();
+    }
+
+    @Test
+    void armedPointCallsSnapshotsAndUnplannedManoeuvres() throws Exception {
+        List<SessionEvent> events = new CopyOnWriteArrayList<>();
+        CardSession s = session(events);
+        onOtherThread(() -> s.arm("LP-B"));
+        AtomicBoolean reading = new AtomicBoolean(true);
+        AtomicReference<String> readerFault = new AtomicReference<>();
+        Thread reader = new Thread(() -> {
+            long last = -1;
+            while (reading.get()) {
+                SessionSnapshot snap = s.snapshot();
+                if (snap.frames() < last) {
+                    readerFault.set("frames went back from " + last + " to " + snap.frames());
+                }
+                last = snap.frames();
+            }
+        });
+        reader.start();
+        SessionSnapshot during = null;
+        boolean called = false;
+        for (Frame f : FRAMES) {
+            s.onFrame(f.copy());
+            SessionSnapshot snap = s.snapshot();
+            if (snap.active() != null && "LP-B".equals(snap.active().cardId())) {
+                during = snap;
+            }
+            if (!called && events.stream().anyMatch(e -> e instanceof SessionEvent.PointFinished)) {
+                called = true;
+                onOtherThread(() -> s.call("LP-B", Verdict.GOOD, "the g spike was the gust, agreed on the net"));
+            }
+        }
+        s.finish();
+        reading.set(false);
+        reader.join();
+        assertNull(readerFault.get());
+
+        assertTrue(events.get(0) instanceof SessionEvent.PointArmed armed && armed.cardId().equals("LP-B"),
+                "arming is applied before the first frame: " + events.get(0));
+        SessionEvent.Unplanned stall = (SessionEvent.Unplanned) events.stream()
+                .filter(e -> e instanceof SessionEvent.Unplanned).findFirst().orElseThrow();
+        assertEquals("stall-level", stall.outcome().kind(), "no stall on this card: logged, not dropped");
+        assertTrue(stall.outcome().metric("stall-kcas") != null, "and analysed");
+
+        assertNotNull(during, "a snapshot showed the loop live, bound to the armed point");
+        assertEquals(2, during.active().gauges().size());
+        SessionSnapshot.Gauge entry = during.active().gauges().get(0);
+        assertEquals("KCAS", entry.subject());
+        assertTrue(Math.abs(entry.value() - 320) < 10 && entry.status() != BandStatus.OUT, entry.toString());
+
+        PointOutcome loop = s.outcomes().stream().filter(o -> "LP-B".equals(o.cardId())).findFirst().orElseThrow();
+        assertEquals(Verdict.REPEAT, loop.verdict(), "the tool's verdict is kept");
+        assertTrue(loop.reasons().stream().anyMatch(r -> r.subject().equals("limit:Nz")), loop.reasons().toString());
+        assertEquals(entry.value(), loop.bands().get(0).value(), 0.5, "the live entry gauge and the final band agree");
+        assertNotNull(loop.operatorCall());
+        assertEquals(Verdict.GOOD, loop.finalCall(), "the engineer's call overrides");
+        assertTrue(events.stream().anyMatch(e -> e instanceof SessionEvent.CallTaken c && c.toolVerdict()
+                == Verdict.REPEAT && c.call().note().startsWith("the g spike")));
+        assertTrue(events.stream().anyMatch(e -> e instanceof SessionEvent.AlarmChanged a && a.alarm().raised()
+                && "LP-B".equals(a.alarm().cardId())));
+
+        SessionSnapshot end = s.snapshot();
+        assertEquals(CardPointState.PENDING, end.points().get(0).state(), "LP-A was never flown");
+        assertEquals(CardPointState.GOOD, end.points().get(1).state());
+        assertEquals(Verdict.REPEAT, end.points().get(1).toolVerdict());
+        assertEquals(Verdict.GOOD, end.points().get(1).engineerCall());
+        assertEquals(1, end.unplanned());
+        assertEquals(List.of("LP-A"), s.notFlown());
+    }
+
+    @Test
+    void aStreamThatStopsMidPointLeavesItIncomplete() {
+        List<SessionEvent> events = new ArrayList<>();
+        CardSession s = session(events);
+        long stopNs = Long.MAX_VALUE;
+        for (Frame f : FRAMES) {
+            if (f.timeNs() > stopNs) {
+                break;
+            }
+            s.onFrame(f.copy());
+            if (stopNs == Long.MAX_VALUE && s.snapshot().active() != null
+                    && "LP-A".equals(s.snapshot().active().cardId())) {
+                stopNs = f.timeNs() + 3_000_000_000L;
+            }
+        }
+        s.finish();
+        PointOutcome loop = s.outcomes().stream().filter(o -> "LP-A".equals(o.cardId())).findFirst().orElseThrow();
+        assertEquals(Verdict.INCOMPLETE, loop.verdict());
+        assertEquals("abandoned: the stream ended while the point was being flown", loop.reasons().get(0).text());
+        assertEquals(CardPointState.INCOMPLETE, s.snapshot().points().get(0).state());
+        assertEquals(List.of("LP-A", "LP-B"), s.notFlown(), "an abandoned point is still to fly");
+    }
+}
