@@ -49,6 +49,9 @@ public final class BenchCommand implements Runnable {
     static final class ConsoleScreen implements Runnable {
         @Option(names = "--seconds", defaultValue = "15", description = "measured seconds per phase (default: ${DEFAULT-VALUE})")
         double seconds;
+        @Option(names = "--redraw-hz", defaultValue = "25",
+                description = "the console's redraw cap (default: ${DEFAULT-VALUE}); the plain charts redraw every pulse")
+        double redrawHz;
         @Option(names = "--warm", defaultValue = "5", description = "warm-up seconds per phase (default: ${DEFAULT-VALUE})")
         double warm;
         @Spec
@@ -63,7 +66,7 @@ public final class BenchCommand implements Runnable {
             if (!(seconds >= 1) || !(warm >= 0)) {
                 throw new IllegalArgumentException("--seconds must be >= 1 and --warm >= 0");
             }
-            print(spec.commandLine().getOut(), org.pointcall.ui.console.ConsoleBench.run(warm, seconds).lines());
+            print(spec.commandLine().getOut(), org.pointcall.ui.console.ConsoleBench.run(warm, seconds, redrawHz).lines());
         }
     }
 

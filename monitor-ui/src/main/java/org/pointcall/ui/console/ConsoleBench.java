@@ -74,8 +74,8 @@ public final class ConsoleBench extends Application {
     private static final CountDownLatch DONE = new CountDownLatch(1);
 
     /** Runs the benchmark (needs a display); blocks until done. */
-    public static Result run(double warmS, double measureS) {
-        SECONDS.set(new double[] {warmS, measureS});
+    public static Result run(double warmS, double measureS, double redrawHz) {
+        SECONDS.set(new double[] {warmS, measureS, redrawHz});
         Application.launch(ConsoleBench.class);
         Throwable t = FAILURE.get();
         if (t != null) {
@@ -111,8 +111,8 @@ public final class ConsoleBench extends Application {
         Thread runner = new Thread(() -> {
             try {
                 double[] s = SECONDS.get();
-                Phase a = phase(stage, "console", link, tap, settings, TraceDrawing.ENVELOPE, s[0], s[1]);
-                Phase b = phase(stage, "plain", link, tap, settings, TraceDrawing.RAW, s[0], s[1]);
+                Phase a = phase(stage, "console", link, tap, settings, TraceDrawing.ENVELOPE, s[2], s[0], s[1]);
+                Phase b = phase(stage, "plain", link, tap, settings, TraceDrawing.RAW, 1000, s[0], s[1]);
                 sending = false;
                 sender.join(5000);
                 rig.awaitDrained(2_000_000_000L);
@@ -130,9 +130,8 @@ public final class ConsoleBench extends Application {
     }
 
     private Phase phase(Stage stage, String name, DeskLink link, TraceTap tap, ConsoleSettings settings,
-                        TraceDrawing drawing, double warmS, double measureS) throws Exception {
+                        TraceDrawing drawing, double hz, double warmS, double measureS) throws Exception {
         AtomicReference<ConsoleView> view = new AtomicReference<>();
-        double hz = drawing == TraceDrawing.ENVELOPE ? ConsoleSetup.DEFAULT_REDRAW_HZ : 1000;
         onFx(() -> {
             ConsoleView v = new ConsoleView(new ConsoleSetup("bench " + name, link, tap.feed(), settings, null, false,
                     hz, drawing));

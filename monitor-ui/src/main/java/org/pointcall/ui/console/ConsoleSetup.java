@@ -21,7 +21,7 @@ import org.pointcall.ui.trace.TraceFeed;
  */
 public record ConsoleSetup(String title, DeskLink link, TraceFeed traces, ConsoleSettings settings, Path settingsFile,
                            boolean replay, double maxRedrawHz, TraceDrawing drawing) {
-    public static final double DEFAULT_REDRAW_HZ = 30;
+    public static final double DEFAULT_REDRAW_HZ = 25;
 
     public ConsoleSetup {
         Objects.requireNonNull(link, "link");

@@ -56,6 +56,7 @@ public final class ConsoleView {
     private long shownVersion = -1;
     private Outcome pendingCall;
     private String pendingPoint;
+    /** When the next redraw is due, on the pulse clock. */
     private long lastRedrawNs;
     private long rateWindowStartNs;
     private long redrawsInWindow;
@@ -158,8 +159,11 @@ public final class ConsoleView {
 
     private void pulse(long nowNs) {
         charts.drain();
-        if (nowNs - lastRedrawNs >= (long) (1e9 / setup.maxRedrawHz()) - 2_000_000L) {
-            lastRedrawNs = nowNs;
+        // Redraws are due on a fixed period; pulses come at the display's rate (60 Hz), so a 25 Hz cap mixes two-
+        // and three-pulse intervals instead of rounding down to every third pulse (20 Hz).
+        long periodNs = (long) (1e9 / setup.maxRedrawHz());
+        if (nowNs >= lastRedrawNs - 8_000_000L) {
+            lastRedrawNs = Math.max(lastRedrawNs + periodNs, nowNs - periodNs);
             charts.redraw(settings.spanS());
             pumpRedraws++;
             redrawsInWindow++;
