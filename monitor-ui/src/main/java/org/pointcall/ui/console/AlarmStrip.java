@@ -71,9 +71,9 @@ final class AlarmStrip {
         first = unacked;
         AlarmLine shown = unacked != null ? unacked : active;
         boolean visible = shown != null;
-        node.setVisible(visible);
-        node.setManaged(visible);
         if (!visible) {
+            node.setVisible(false);
+            node.setManaged(false);
             return;
         }
         node.getStyleClass().remove("seen");
@@ -85,5 +85,7 @@ final class AlarmStrip {
                 (t / 60) % 60, t % 60, shown.active() ? "" : "  \u2014 back inside"));
         count.setText(waiting > 0 ? waiting + " to acknowledge" : "acknowledged");
         ack.setVisible(unacked != null);
+        node.setVisible(true);
+        node.setManaged(true);
     }
 }

@@ -204,7 +204,8 @@ class ConsoleViewTest {
         publisher.publishOnce(System.nanoTime());
         assertTrue(desk.events().stream().anyMatch(e -> e.kind() == org.pointcall.ui.desk.LogEntry.Kind.ALARM),
                 "the session raised the alarm");
-        waitUntil(() -> robot.lookup("#alarm-strip").query().isVisible());
+        waitUntil(() -> robot.lookup("#alarm-strip").query().isVisible()
+                && "1 to acknowledge".equals(text(robot, "alarm-count")));
         assertTrue(text(robot, "alarm-text").contains("Nz"), text(robot, "alarm-text"));
         assertEquals("1 to acknowledge", text(robot, "alarm-count"));
         assertFalse(robot.lookup("#alarm-strip").query().getStyleClass().contains("seen"));
