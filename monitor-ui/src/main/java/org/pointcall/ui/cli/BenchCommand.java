@@ -22,7 +22,7 @@ import picocli.CommandLine.Model.CommandSpec;
         header = "Speed benchmarks: ingest, UDP, Kafka, simulator, recorder, replay.",
         mixinStandardHelpOptions = true,
         description = "Speed benchmarks; each prints its figures and ratios as 'name: value unit'.",
-        subcommands = {BenchCommand.Ingest.class, BenchCommand.Udp.class, BenchCommand.Kafka.class, BenchCommand.Sim.class,
+        subcommands = {BenchCommand.ConsoleScreen.class, BenchCommand.Ingest.class, BenchCommand.Udp.class, BenchCommand.Kafka.class, BenchCommand.Sim.class,
             BenchCommand.Record.class, BenchCommand.Replay.class})
 public final class BenchCommand implements Runnable {
     @Spec
@@ -38,6 +38,36 @@ public final class BenchCommand implements Runnable {
             out.println(l);
         }
         out.flush();
+    }
+
+    @Command(name = "console", mixinStandardHelpOptions = true,
+            header = "Console screen: 8 strip charts at 1,000 samples/s against plain ChartFX.",
+            description = {"The console with 8 strip-chart lanes of 20 s, each fed 1,000 samples/s by workload W1",
+                "through the full ingest pipeline over UDP on loopback; first with the console's envelope, then the",
+                "same charts fed every sample with ChartFX's own reduction off. Needs a display (an X server such",
+                "as Xvfb; with software rendering pass -Dprism.order=sw to java)."})
+    static final class ConsoleScreen implements Runnable {
+        @Option(names = "--seconds", defaultValue = "15", description = "measured seconds per phase (default: ${DEFAULT-VALUE})")
+        double seconds;
+        @Option(names = "--redraw-hz", defaultValue = "25",
+                description = "the console's redraw cap (default: ${DEFAULT-VALUE}); the plain charts redraw every pulse")
+        double redrawHz;
+        @Option(names = "--warm", defaultValue = "5", description = "warm-up seconds per phase (default: ${DEFAULT-VALUE})")
+        double warm;
+        @Spec
+        CommandSpec spec;
+
+        @Override
+        public void run() {
+            if (!org.pointcall.ui.console.ConsoleApp.displayAvailable()) {
+                throw new org.pointcall.shared.error.PointcallException(
+                        "bench console needs a display: DISPLAY is not set (start Xvfb, or run it on a desktop)");
+            }
+            if (!(seconds >= 1) || !(warm >= 0)) {
+                throw new IllegalArgumentException("--seconds must be >= 1 and --warm >= 0");
+            }
+            print(spec.commandLine().getOut(), org.pointcall.ui.console.ConsoleBench.run(warm, seconds, redrawHz).lines());
+        }
     }
 
     @Command(name = "ingest", mixinStandardHelpOptions = true, header = "W1 decode + features against a CRC-32C pass.",

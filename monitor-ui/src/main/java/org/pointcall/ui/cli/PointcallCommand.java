@@ -34,6 +34,8 @@ import picocli.CommandLine.Command;
             MonitorCommand.class,
             NextCardCommand.class,
             BenchCommand.class,
+            DemoCommand.class,
+            ConsoleCommand.class,
             CommandLine.HelpCommand.class
         })
 public final class PointcallCommand implements Runnable {

@@ -1,0 +1,156 @@
+package org.pointcall.ui.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.Callable;
+
+import org.pointcall.models.card.CardAnalysers;
+import org.pointcall.models.card.CardSession;
+import org.pointcall.models.card.SessionSetup;
+import org.pointcall.models.modelfile.LoadedModel;
+import org.pointcall.models.train.Classifier;
+import org.pointcall.replay.archive.ArchiveReader;
+import org.pointcall.replay.play.ArchiveSource;
+import org.pointcall.replay.play.ReplayClock;
+import org.pointcall.replay.play.ReplayControl;
+import org.pointcall.replay.play.ReplayTargets;
+import org.pointcall.replay.play.Replayer;
+import org.pointcall.shared.card.TestCard;
+import org.pointcall.shared.demo.DemoFiles;
+import org.pointcall.shared.dictionary.DictionaryFiles;
+import org.pointcall.shared.dictionary.ParameterDictionary;
+import org.pointcall.shared.error.PointcallException;
+import org.pointcall.ui.console.ConsoleApp;
+import org.pointcall.ui.console.ConsoleSetup;
+import org.pointcall.ui.console.TraceDrawing;
+import org.pointcall.ui.demo.LiveConsole;
+import org.pointcall.ui.demo.ReplayTransport;
+import org.pointcall.ui.demo.SessionDesk;
+import org.pointcall.ui.desk.PointSpan;
+import org.pointcall.ui.settings.ConsoleSettings;
+import org.pointcall.ui.settings.SettingsFile;
+
+import picocli.CommandLine.ArgGroup;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** The console on a live UDP stream or on a recorded sortie archive (with the replay transport). */
+@Command(name = "console",
+        header = "Open the console on a live stream or a recorded sortie.",
+        mixinStandardHelpOptions = true,
+        description = {
+            "Live: listens on udp://127.0.0.1:PORT (for example fed by 'simulate --to'), runs the card session",
+            "and shows it. Replay: plays a sortie archive (from 'record' or 'demo') through the same pipeline",
+            "and session, with play, pause, speed, seek and jump to point. Keys: see the window's header."
+        })
+public final class ConsoleCommand implements Callable<Integer> {
+    static final class Source {
+        @Option(names = "--listen", paramLabel = "udp://127.0.0.1:PORT", description = "live stream to watch")
+        String listen;
+        @Option(names = "--replay", paramLabel = "ARCHIVE", description = "sortie archive to replay")
+        Path replay;
+    }
+
+    @ArgGroup(exclusive = true, multiplicity = "1")
+    Source source;
+
+    @Option(names = "--card", paramLabel = "CARD", description = "test card (default: the demo card)")
+    Path cardFile;
+
+    @Option(names = "--speed", defaultValue = "1", description = "replay speed (default: ${DEFAULT-VALUE})")
+    double speed;
+
+    @Option(names = "--paused", description = "replay: open paused")
+    boolean paused;
+
+    @Option(names = "--screenshot", paramLabel = "FILE", description = "write a PNG of the whole window, then exit")
+    Path screenshot;
+
+    @Option(names = "--after", paramLabel = "SECONDS", defaultValue = "10",
+            description = "with --screenshot: wall seconds after the window opens (default: ${DEFAULT-VALUE})")
+    double afterS;
+
+    @Option(names = "--settings", paramLabel = "FILE", description = "console layout file (default: "
+            + "~/.config/pointcall/console.conf)")
+    Path settingsFile;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() throws Exception {
+        PrintWriter err = spec.commandLine().getErr();
+        if (!ConsoleApp.displayAvailable()) {
+            throw new PointcallException("no display (DISPLAY is not set): the console needs one; 'monitor "
+                    + "--headless' follows a stream without it");
+        }
+        Path settingsPath = settingsFile != null ? settingsFile : SettingsFile.defaultPath();
+        List<String> problems = new ArrayList<>();
+        ConsoleSettings settings = SettingsFile.load(settingsPath, problems);
+        problems.forEach(p -> err.println("console: " + p));
+        ArchiveReader reader = null;
+        ParameterDictionary dict = DemoFiles.dictionary();
+        if (source.replay != null) {
+            reader = ArchiveReader.open(source.replay);
+            if (!reader.dictionaries().isEmpty()) {
+                dict = DictionaryFiles.parse(reader.dictionaries().get(0).text(), source.replay.toString());
+            }
+        }
+        TestCard card = cardFile == null ? DemoFiles.card() : AnalyzeCommand.loadCard(cardFile, dict);
+        LoadedModel<Classifier> model = DetectorModel.load(null);
+        SessionDesk desk = new SessionDesk(card, dict);
+        List<String> faults = java.util.Collections.synchronizedList(new ArrayList<>());
+        int port = source.listen == null ? 0 : MonitorCommand.address(source.listen).getPort();
+        try (LiveConsole live = new LiveConsole(port, dict, settings, desk,
+                (d, listener) -> new CardSession(SessionSetup.of(d, card, model.model(), model.metadata().description(),
+                        CardAnalysers.standard()), listener), null, faults::add, source.replay == null)) {
+            live.start();
+            Thread player = null;
+            if (reader != null) {
+                ReplayControl control = new ReplayControl(ReplayControl.parseSpeed(Double.toString(speed)), paused);
+                long first = reader.firstTimeNs();
+                double lengthS = (reader.lastTimeNs() - first) / 1e9;
+                // Archive time is arrival time; a point's begin is data time. The two are mapped by what has been
+                // played so far (a sortie recorded at 4x has four seconds of data per archive second).
+                desk.transport(new ReplayTransport(control, first, lengthS, id -> {
+                    long d0 = live.clock().firstNs();
+                    long dNow = live.clock().timeNs();
+                    long aNow = control.positionNs();
+                    if (d0 == Long.MIN_VALUE || aNow == Long.MIN_VALUE) {
+                        return null;
+                    }
+                    double ratio = dNow > d0 ? (double) (aNow - first) / (dNow - d0) : 1.0;
+                    for (PointSpan s : desk.spans()) {
+                        if (s.pointId().equals(id)) {
+                            return (first + (s.beginS() * 1e9 - d0) * ratio) / 1e9;
+                        }
+                    }
+                    return null;
+                }));
+                ArchiveReader r = reader;
+                player = new Thread(() -> new Replayer(new ArchiveSource(r),
+                        ReplayTargets.pipeline(live.rig().pipeline()), ReplayClock.SYSTEM, control).run(), "replay");
+                player.setDaemon(true);
+                player.start();
+            }
+            ConsoleSetup setup = new ConsoleSetup("pointcall console \u2014 " + card.sortie()
+                    + (reader == null ? " (live)" : " (replay)"), live.link(), live.traces(), settings, settingsPath,
+                    reader != null, ConsoleSetup.DEFAULT_REDRAW_HZ, TraceDrawing.ENVELOPE);
+            ConsoleApp.run(setup, screenshot == null ? null : new ConsoleApp.Screenshot(screenshot, afterS));
+            if (screenshot != null) {
+                spec.commandLine().getOut().println("wrote: " + screenshot);
+            }
+        } finally {
+            if (reader != null) {
+                reader.close();
+            }
+        }
+        faults.forEach(f -> err.println("console: " + f));
+        spec.commandLine().getOut().flush();
+        return 0;
+    }
+}

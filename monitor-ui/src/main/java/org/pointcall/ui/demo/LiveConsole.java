@@ -1,0 +1,126 @@
+package org.pointcall.ui.demo;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.function.Consumer;
+import java.util.function.Function;
+
+import org.pointcall.ingest.frame.FrameSink;
+import org.pointcall.ingest.udp.DatagramHandler;
+import org.pointcall.models.card.CardSession;
+import org.pointcall.models.card.SessionListener;
+import org.pointcall.shared.dictionary.ParameterDictionary;
+import org.pointcall.ui.desk.DeskLink;
+import org.pointcall.ui.settings.ConsoleSettings;
+import org.pointcall.ui.trace.TraceFeed;
+import org.pointcall.ui.trace.TraceTap;
+
+/**
+ * The live side of a console, wired: UDP receive (and recorder tee) into the pipeline; per stream the card
+ * session, then the data clock and the chart tap, all on the pipeline thread; the snapshot publisher on its own
+ * thread. The window, if any, attaches to {@link #link()} and {@link #traces()}.
+ */
+public final class LiveConsole implements AutoCloseable {
+    /** About 16 s of 1,000 samples/s: the screen may stall that long before it skips samples. */
+    static final int RING_SAMPLES = 1 << 14;
+
+    /** Makes the card session of a stream, reporting to the given listener. */
+    @FunctionalInterface
+    public interface SessionFactory {
+        CardSession create(ParameterDictionary dictionary, SessionListener listener);
+    }
+
+    private final DeskLink link = new DeskLink();
+    private final TraceTap tap;
+    private final DataClock clock = new DataClock();
+    private final LiveRig rig;
+    private final DeskPublisher publisher;
+    private final SessionDesk desk;
+    private volatile CardSession session;
+
+    /**
+     * @param dictionary the expected stream dictionary (the charted parameters are checked against it)
+     * @param sessions   makes the card session of a stream
+     * @param tee        recorder tee, or {@code null}
+     */
+    public LiveConsole(int port, ParameterDictionary dictionary, ConsoleSettings settings, SessionDesk desk,
+                       SessionFactory sessions, Function<DatagramHandler, DatagramHandler> tee,
+                       Consumer<String> faults) {
+        this(port, dictionary, settings, desk, sessions, tee, faults, true);
+    }
+
+    /** @param live false for a replay fed into the pipeline (no arrival latency) */
+    public LiveConsole(int port, ParameterDictionary dictionary, ConsoleSettings settings, SessionDesk desk,
+                       SessionFactory sessions, Function<DatagramHandler, DatagramHandler> tee,
+                       Consumer<String> faults, boolean live) {
+        this.desk = desk;
+        List<String> charted = new ArrayList<>();
+        for (String p : settings.chartedParameters()) {
+            if (dictionary.indexOf(p) >= 0) {
+                charted.add(p);
+            } else {
+                faults.accept("chart parameter '" + p + "' is not in the dictionary; its lane stays empty");
+            }
+        }
+        tap = new TraceTap(dictionary, charted.isEmpty() ? List.of(dictionary.parameters().get(0).name()) : charted,
+                RING_SAMPLES);
+        rig = new LiveRig(port, (id, d) -> {
+            CardSession old = session;
+            if (old != null) {
+                old.finish();
+            }
+            CardSession s = sessions.create(d, desk);
+            desk.bind(s);
+            session = s;
+            FrameSink[] after = {s::onFrame, clock, tap};
+            return f -> {
+                for (FrameSink x : after) {
+                    x.onFrame(f);
+                }
+            };
+        }, tee, faults, live);
+        publisher = new DeskPublisher(link, desk, new HealthReader(rig.meters()), clock::timeCs);
+    }
+
+    public void start() {
+        rig.start();
+        publisher.start();
+    }
+
+    public DeskLink link() {
+        return link;
+    }
+
+    public TraceFeed traces() {
+        return tap.feed();
+    }
+
+    public LiveRig rig() {
+        return rig;
+    }
+
+    public SessionDesk desk() {
+        return desk;
+    }
+
+    /** The current stream's session, or null before the first dictionary. */
+    public CardSession session() {
+        return session;
+    }
+
+    public DataClock clock() {
+        return clock;
+    }
+
+    /** Stops receiving, drains the pipeline and ends the session (a point in flight becomes incomplete). */
+    @Override
+    public void close() {
+        rig.close();
+        CardSession s = session;
+        if (s != null) {
+            s.finish();
+        }
+        publisher.publishOnce(System.nanoTime());
+        publisher.close();
+    }
+}

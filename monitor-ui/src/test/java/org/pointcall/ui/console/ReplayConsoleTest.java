@@ -1,0 +1,171 @@
+package org.pointcall.ui.console;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.ByteBuffer;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.Callable;
+import java.util.concurrent.TimeUnit;
+
+import javafx.scene.Scene;
+import javafx.scene.control.Label;
+import javafx.scene.input.KeyCode;
+import javafx.stage.Stage;
+
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.ExtendWith;
+import org.junit.jupiter.api.io.TempDir;
+import org.pointcall.ingest.sim.SortieSimulator;
+import org.pointcall.ingest.sim.airframe.Airframes;
+import org.pointcall.ingest.sim.pilot.PilotSettings;
+import org.pointcall.ingest.sim.sensor.SensorSettings;
+import org.pointcall.ingest.wire.StreamEncoder;
+import org.pointcall.ingest.wire.WireOptions;
+import org.pointcall.models.card.CardAnalysers;
+import org.pointcall.models.card.CardSession;
+import org.pointcall.models.card.SessionSetup;
+import org.pointcall.replay.archive.ArchiveReader;
+import org.pointcall.replay.play.ArchiveSource;
+import org.pointcall.replay.play.ReplayClock;
+import org.pointcall.replay.play.ReplayControl;
+import org.pointcall.replay.play.ReplayState;
+import org.pointcall.replay.play.ReplayTargets;
+import org.pointcall.replay.play.Replayer;
+import org.pointcall.replay.record.Recorder;
+import org.pointcall.replay.record.RecorderPolicy;
+import org.pointcall.shared.card.TestCard;
+import org.pointcall.shared.demo.DemoFiles;
+import org.pointcall.shared.dictionary.DictionaryFiles;
+import org.pointcall.shared.dictionary.ParameterDictionary;
+import org.pointcall.ui.demo.LiveConsole;
+import org.pointcall.ui.demo.ReplayTransport;
+import org.pointcall.ui.demo.SessionDesk;
+import org.pointcall.ui.settings.ConsoleSettings;
+import org.testfx.api.FxRobot;
+import org.testfx.framework.junit5.ApplicationExtension;
+import org.testfx.framework.junit5.Start;
+import org.testfx.util.WaitForAsyncUtils;
+
+/**
+ * A recorded sortie (simulator frames recorded by the real recorder into a real archive) replayed through the
+ * pipeline and the card session into the console; the transport keys pause and seek it.
+ */
+@ExtendWith(ApplicationExtension.class)
+class ReplayConsoleTest {
+    private static final double RECORDED_S = 60;
+
+    @TempDir
+    static Path dir;
+
+    private final ParameterDictionary dict = DemoFiles.dictionary();
+    private final TestCard card = DemoFiles.card();
+    private LiveConsole live;
+    private ReplayControl control;
+    private ArchiveReader reader;
+    private Thread player;
+    private ConsoleView view;
+
+    /** 60 s of the demo sortie at 32 Hz, recorded with the data time as arrival time. */
+    private Path record() {
+        Path file = dir.resolve("sortie.pcsa");
+        Recorder rec = Recorder.start(file, RecorderPolicy.DEFAULT, System::nanoTime, a -> { });
+        long[] now = {0};
+        StreamEncoder enc = new StreamEncoder(1, StreamEncoder.newEpoch(), dict, DictionaryFiles.toYaml(dict),
+                WireOptions.DEFAULT.withSynthetic(true), (ByteBuffer p) -> {
+                    while (!rec.offer(p, now[0])) {
+                        Thread.onSpinWait();
+                    }
+                });
+        final class Enough extends RuntimeException {
+            private static final long serialVersionUID = 1L;
+        }
+        SortieSimulator sim = new SortieSimulator(Airframes.load("veskarn-02"), card, dict, 1, 32,
+                SensorSettings.DEFAULT, PilotSettings.DEFAULT);
+        try {
+            sim.run(List.of(f -> {
+                if (f.timeNs() > RECORDED_S * 1e9) {
+                    throw new Enough();
+                }
+                now[0] = f.timeNs();
+                enc.onFrame(f);
+            }));
+        } catch (Enough expected) {
+            // a minute of sortie is enough to pause and seek in
+        }
+        enc.flush();
+        rec.close();
+        return file;
+    }
+
+    @Start
+    void start(Stage stage) throws Exception {
+        reader = ArchiveReader.open(record());
+        SessionDesk desk = new SessionDesk(card, dict);
+        var model = ConsoleViewTest.model();
+        live = new LiveConsole(0, dict, ConsoleSettings.defaults(), desk,
+                (d, l) -> new CardSession(SessionSetup.of(d, card, model.model(), model.metadata().description(),
+                        CardAnalysers.standard()), l), null, line -> { }, false);
+        control = new ReplayControl(1, false);
+        long first = reader.firstTimeNs();
+        desk.transport(new ReplayTransport(control, first, (reader.lastTimeNs() - first) / 1e9, id -> null));
+        live.start();
+        player = new Thread(() -> new Replayer(new ArchiveSource(reader), ReplayTargets.pipeline(live.rig().pipeline()),
+                ReplayClock.SYSTEM, control).run(), "replay");
+        player.setDaemon(true);
+        player.start();
+        view = new ConsoleView(new ConsoleSetup("replay test", live.link(), live.traces(), ConsoleSettings.defaults(),
+                null, true, 30, TraceDrawing.ENVELOPE));
+        stage.setScene(new Scene(view.root(), 1400, 900));
+        stage.show();
+        view.root().requestFocus();
+        view.start();
+    }
+
+    @AfterEach
+    void stop() throws Exception {
+        control.stop();
+        player.join(5000);
+        live.close();
+        reader.close();
+        WaitForAsyncUtils.asyncFx(() -> view.stop()).get(5, TimeUnit.SECONDS);
+    }
+
+    private static void waitUntil(Callable<Boolean> c) throws Exception {
+        WaitForAsyncUtils.waitFor(20, TimeUnit.SECONDS, c);
+    }
+
+    private static String text(FxRobot robot, String id) {
+        return ((Label) robot.lookup("#" + id).query()).getText();
+    }
+
+    /** Seconds shown as the replay position ("mm:ss / mm:ss ..."). */
+    private static int shownSeconds(FxRobot robot) {
+        String t = text(robot, "transport-position");
+        return Integer.parseInt(t.substring(0, 2)) * 60 + Integer.parseInt(t.substring(3, 5));
+    }
+
+    @Test
+    void spacePausesTheReplayAndRightArrowSeeksItForward(FxRobot robot) throws Exception {
+        waitUntil(() -> text(robot, "transport-position").contains("playing") && shownSeconds(robot) >= 2);
+
+        robot.type(KeyCode.SPACE);
+        waitUntil(() -> control.state() == ReplayState.PAUSED);
+        waitUntil(() -> text(robot, "transport-position").contains("PAUSED"));
+        int pausedAt = shownSeconds(robot);
+        String lane = text(robot, "lane-value-Hp");
+        Thread.sleep(1500);
+        assertEquals(pausedAt, shownSeconds(robot), "a paused replay stands still");
+        assertEquals(lane, text(robot, "lane-value-Hp"), "and so do the traces");
+
+        robot.type(KeyCode.RIGHT); // 10 s forward
+        robot.type(KeyCode.SPACE);
+        waitUntil(() -> control.state() == ReplayState.PLAYING);
+        // at 1x, playing alone would need 10 s to get there: within 6 s only the seek does it
+        WaitForAsyncUtils.waitFor(6, TimeUnit.SECONDS, () -> shownSeconds(robot) >= pausedAt + 10);
+        assertTrue(text(robot, "transport-position").contains("playing"), text(robot, "transport-position"));
+        assertTrue(Double.parseDouble(text(robot, "lane-value-Hp")) > 5000, "the traces go on after the seek");
+    }
+}
