@@ -31,6 +31,7 @@ import picocli.CommandLine.Command;
             AnalyzeCommand.class,
             MonitorCommand.class,
             NextCardCommand.class,
+            ReportCommand.class,
             BenchCommand.class,
             CommandLine.HelpCommand.class
         })
