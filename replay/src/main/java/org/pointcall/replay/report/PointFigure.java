@@ -342,7 +342,8 @@ public final class PointFigure {
             }
             p.addAnnotation(new XYBoxAnnotation(fromS, lo, toS, hi, new BasicStroke(1f), withAlpha(c, 170),
                     withAlpha(c, 50)), false);
-            label(p, fromS, Math.min(hi, yHi), c, TextAnchor.TOP_LEFT);
+            // at the box's foot: its top edge is where the begin, end and instant labels are
+            label(p, fromS, Math.max(lo, yLo), c, TextAnchor.BOTTOM_LEFT);
         }
 
         private void label(XYPlot p, double x, double y, Color c, TextAnchor anchor) {

@@ -476,7 +476,10 @@ final class ReportPage {
             h.el("td", r.value() == null ? "no value" : Numbers.near(r.value(), 4) + unit(r.unit()), "class", "num");
             h.el("td", r.marginFraction() == null ? "" : String.format(Locale.ROOT, "%+.0f %%",
                     r.marginFraction() * 100), "class", "num");
-            h.el("td", r.status().key() + (r.outsideS() > 0 ? ", " + Numbers.near(r.outsideS(), 2) + " s out" : ""));
+            String status = r.held() && r.outsideS() > 0 ? "held, outside " + Numbers.near(r.outsideS(), 2)
+                    + " s (let pass)" : r.status().key() + (r.outsideS() > 0 ? ", outside "
+                    + Numbers.near(r.outsideS(), 2) + " s" : "");
+            h.el("td", status);
             h.el("td", r.held() ? "yes" : "NO").close("tr");
         }
         h.close("tbody").close("table");
