@@ -27,9 +27,9 @@ import org.junit.jupiter.api.extension.ParameterResolver;
 /**
  * A real Apache Kafka broker (KRaft, broker and controller in one node) inside the test JVM, on 127.0.0.1 with free
  * ports and a temporary log directory. {@link Shared} starts one per JVM for every test class that asks for it and
- * stops it when the test run ends.
+ * stops it when the test run ends. Public for the tests of the modules after ingest (through ingest's test jar).
  */
-final class LocalKafkaBroker implements AutoCloseable {
+public final class LocalKafkaBroker implements AutoCloseable {
     private final Path dir;
     private final KafkaRaftServer server;
     private final String bootstrap;
@@ -40,7 +40,7 @@ final class LocalKafkaBroker implements AutoCloseable {
         this.bootstrap = bootstrap;
     }
 
-    static LocalKafkaBroker start() throws Exception {
+    public static LocalKafkaBroker start() throws Exception {
         Path dir = Files.createTempDirectory("pointcall-kafka-test");
         int brokerPort = BrokerProcess.freePort();
         int controllerPort = BrokerProcess.freePort();
@@ -66,12 +66,12 @@ final class LocalKafkaBroker implements AutoCloseable {
         return new LocalKafkaBroker(dir, server, bootstrap);
     }
 
-    String bootstrap() {
+    public String bootstrap() {
         return bootstrap;
     }
 
     /** Settings for this broker with a topic prefix of the test's own, so tests never share topics. */
-    KafkaSettings settings(String prefix) {
+    public KafkaSettings settings(String prefix) {
         return KafkaSettings.of(bootstrap).withTopicPrefix(prefix);
     }
 
@@ -102,7 +102,7 @@ final class LocalKafkaBroker implements AutoCloseable {
      * parameter in {@code @BeforeAll} or a test. The broker lives in the root store, so it starts once per JVM
      * and JUnit closes it at the end of the run.
      */
-    static final class Shared implements ParameterResolver {
+    public static final class Shared implements ParameterResolver {
         @Override
         public boolean supportsParameter(ParameterContext parameter, ExtensionContext context) {
             return parameter.getParameter().getType() == LocalKafkaBroker.class;

@@ -19,10 +19,11 @@ import picocli.CommandLine.Model.CommandSpec;
  * run against a baseline measured in the same run, and reported as ratios; nothing here is a pass/fail test.
  */
 @Command(name = "bench",
-        header = "Speed benchmarks: ingest, UDP, Kafka, simulator.",
+        header = "Speed benchmarks: ingest, UDP, Kafka, simulator, recorder, replay.",
         mixinStandardHelpOptions = true,
         description = "Speed benchmarks; each prints its figures and ratios as 'name: value unit'.",
-        subcommands = {BenchCommand.Ingest.class, BenchCommand.Udp.class, BenchCommand.Kafka.class, BenchCommand.Sim.class})
+        subcommands = {BenchCommand.Ingest.class, BenchCommand.Udp.class, BenchCommand.Kafka.class, BenchCommand.Sim.class,
+            BenchCommand.Record.class, BenchCommand.Replay.class})
 public final class BenchCommand implements Runnable {
     @Spec
     CommandSpec spec;
@@ -144,6 +145,49 @@ public final class BenchCommand implements Runnable {
             out.println(String.format(java.util.Locale.ROOT, "sim.speed.cpu: %.1f x real time (one core, thread CPU time)",
                     t.durationS() / (cpu / 1e9)));
             out.flush();
+        }
+    }
+
+    @Command(name = "record", mixinStandardHelpOptions = true, header = "Recorder at W1: loss and its own CPU.",
+            description = {"Feeds W1 (256 parameters at 1,000 frames/s, 2,000 packets/s) in real time to the recorder",
+                "and reports packets not recorded and the recorder thread's CPU time as a share of one core;",
+                "the archive is read back and counted, then deleted."})
+    static final class Record implements java.util.concurrent.Callable<Integer> {
+        @Option(names = "--seconds", defaultValue = "60", description = "run length (default: ${DEFAULT-VALUE})")
+        int seconds;
+        @Option(names = "--dir", description = "folder for the archive (default: the system's temporary folder)")
+        java.nio.file.Path dir;
+        @Spec
+        CommandSpec spec;
+
+        @Override
+        public Integer call() throws java.io.IOException {
+            java.nio.file.Path d = dir != null ? dir : java.nio.file.Path.of(System.getProperty("java.io.tmpdir"));
+            print(spec.commandLine().getOut(), org.pointcall.replay.record.RecordBench.run(seconds, d,
+                    org.pointcall.replay.record.RecorderPolicy.DEFAULT).lines());
+            return 0;
+        }
+    }
+
+    @Command(name = "replay", mixinStandardHelpOptions = true, header = "Replay at W1: max speed into the pipeline, 1x timing.",
+            description = {"Writes an archive of W1, replays it as fast as possible into the full ingest pipeline",
+                "(decode, derive, features) against a plain read of the archive, then replays at 1x and reports",
+                "elapsed against data time. The archive is deleted afterwards."})
+    static final class Replay implements java.util.concurrent.Callable<Integer> {
+        @Option(names = "--seconds", defaultValue = "60", description = "seconds of data, max-speed rounds (default: ${DEFAULT-VALUE})")
+        int seconds;
+        @Option(names = "--paced-seconds", defaultValue = "60", description = "seconds replayed at 1x, 0 to skip (default: ${DEFAULT-VALUE})")
+        int pacedSeconds;
+        @Option(names = "--dir", description = "folder for the archive (default: the system's temporary folder)")
+        java.nio.file.Path dir;
+        @Spec
+        CommandSpec spec;
+
+        @Override
+        public Integer call() throws java.io.IOException {
+            java.nio.file.Path d = dir != null ? dir : java.nio.file.Path.of(System.getProperty("java.io.tmpdir"));
+            print(spec.commandLine().getOut(), org.pointcall.replay.play.ReplayBench.run(seconds, pacedSeconds, d).lines());
+            return 0;
         }
     }
 

@@ -12,6 +12,10 @@ import org.pointcall.ingest.file.ReadOptions;
 import org.pointcall.ingest.file.ReadReport;
 import org.pointcall.ingest.file.RecordedFileSource;
 import org.pointcall.ingest.file.RecordedFiles;
+import org.pointcall.ingest.wire.DictionaryRegistry;
+import org.pointcall.replay.archive.ArchiveFormat;
+import org.pointcall.replay.archive.ArchiveReader;
+import org.pointcall.replay.archive.ArchiveSummary;
 import org.pointcall.shared.demo.DemoFiles;
 import org.pointcall.shared.dictionary.DictionaryFiles;
 import org.pointcall.shared.dictionary.Parameter;
@@ -25,16 +29,19 @@ import picocli.CommandLine.Model.CommandSpec;
 
 /** Reads a recorded time history through a dictionary and says what it found, before anyone analyses it. */
 @Command(name = "inspect",
-        header = "Read a recorded CSV/XLSX file and report what it holds.",
+        header = "Read a recorded CSV/XLSX file or a sortie archive and report what it holds.",
         mixinStandardHelpOptions = true,
         description = {
             "Reads a recorded file (CSV or XLSX) through a parameter dictionary, computes the derived",
             "parameters, and reports the columns bound, rows read and skipped, wild points, and the span",
-            "and range of every parameter. Exit code 2 when rows had to be skipped (each is listed)."
+            "and range of every parameter. Exit code 2 when rows had to be skipped (each is listed).",
+            "A sortie archive is summed up instead: span, chunks, packets per stream, frames decoded,",
+            "records by type, and any damage or cut end (exit code 2 when chunks were damaged)."
         })
 public final class InspectCommand implements Callable<Integer> {
 
-    @Option(names = "--input", required = true, paramLabel = "FILE", description = "recorded file (.csv, .xlsx)")
+    @Option(names = "--input", required = true, paramLabel = "FILE",
+            description = "recorded file (.csv, .xlsx) or sortie archive (" + ArchiveFormat.EXTENSION + ")")
     Path input;
 
     @Option(names = "--dictionary", paramLabel = "FILE", description = "parameter dictionary (default: the demo one)")
@@ -56,6 +63,10 @@ public final class InspectCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         ParameterDictionary dict = dictionaryFile == null ? DemoFiles.dictionary() : DictionaryFiles.load(dictionaryFile);
+        if (input.getFileName() != null && input.getFileName().toString().toLowerCase(Locale.ROOT)
+                .endsWith(ArchiveFormat.EXTENSION)) {
+            return inspectArchive(dict);
+        }
         ReadOptions opts = ReadOptions.DEFAULTS;
         if (timeColumn != null) {
             opts = opts.withTimeColumn(timeColumn);
@@ -108,5 +119,17 @@ public final class InspectCommand implements Callable<Integer> {
         }
         err.flush();
         return report.rowsSkipped() > 0 ? PointcallCommand.EXIT_BAD_INPUT : 0;
+    }
+
+    /** A sortie archive: what it holds and whether any of it was damaged or cut. */
+    private int inspectArchive(ParameterDictionary dict) {
+        PrintWriter out = spec.commandLine().getOut();
+        try (ArchiveReader r = ArchiveReader.open(input)) {
+            for (String line : ArchiveSummary.lines(r, new DictionaryRegistry(java.util.List.of(dict)))) {
+                out.println(line);
+            }
+            out.flush();
+            return r.damage().isEmpty() ? 0 : PointcallCommand.EXIT_BAD_INPUT;
+        }
     }
 }

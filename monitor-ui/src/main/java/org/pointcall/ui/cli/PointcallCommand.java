@@ -24,6 +24,8 @@ import picocli.CommandLine.Command;
             CheckCommand.class,
             ExamplesCommand.class,
             InspectCommand.class,
+            RecordCommand.class,
+            ReplayCommand.class,
             SimulateCommand.class,
             SortieSetCommand.class,
             TrainCommand.class,
