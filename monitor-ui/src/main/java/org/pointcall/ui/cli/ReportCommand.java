@@ -10,6 +10,9 @@ import java.util.concurrent.Callable;
 
 import org.pointcall.models.modelfile.LoadedModel;
 import org.pointcall.models.train.Classifier;
+import org.pointcall.replay.archive.ArchiveFormat;
+import org.pointcall.replay.archive.ArchiveReader;
+import org.pointcall.replay.report.ArchiveAnalysis;
 import org.pointcall.replay.report.DebriefContent;
 import org.pointcall.replay.report.DebriefReport;
 import org.pointcall.replay.report.ReportProgress;
@@ -39,7 +42,7 @@ import picocli.CommandLine.Model.CommandSpec;
         })
 public final class ReportCommand implements Callable<Integer> {
 
-    @Option(names = "--input", paramLabel = "FILE", description = "recorded sortie (.csv, .xlsx)")
+    @Option(names = "--input", paramLabel = "FILE", description = "recorded sortie (.csv, .xlsx) or sortie archive (.pcsa)")
     Path input;
 
     @Option(names = "--results", paramLabel = "DIR", description = "folder with points.json (from analyze or monitor)")
@@ -107,14 +110,25 @@ public final class ReportCommand implements Callable<Integer> {
                 throw new PointcallException(json + ": the results are of sortie " + points.sortie()
                         + ", the card " + cardFile + " is of " + card.sortie());
             }
+            if (input != null && isArchive(input)) {
+                throw new PointcallException(input + ": with --results, give the recorded CSV/XLSX file for the "
+                        + "figures; an archive is analysed on its own (--input ARCHIVE without --results)");
+            }
             if (input != null) {
                 reading = SortieAnalysis.observe(input, dict, card, progress.within(0, 0.4));
             }
             model = null;
         } else {
             LoadedModel<Classifier> loaded = DetectorModel.load(modelFile);
-            reading = SortieAnalysis.analyse(input, dict, card, loaded.model(), loaded.metadata().description(),
-                    progress.within(0, 0.6));
+            if (isArchive(input)) {
+                try (ArchiveReader reader = ArchiveReader.open(input)) {
+                    reading = ArchiveAnalysis.analyse(reader, dict, card, loaded.model(),
+                            loaded.metadata().description(), progress.within(0, 0.6));
+                }
+            } else {
+                reading = SortieAnalysis.analyse(input, dict, card, loaded.model(), loaded.metadata().description(),
+                        progress.within(0, 0.6));
+            }
             points = reading.points();
             List<Path> files = PointsFiles.write(out, points);
             w.println("wrote: " + files.get(0) + ", " + files.get(1));
@@ -132,6 +146,10 @@ public final class ReportCommand implements Callable<Integer> {
         w.println("wrote: " + written.html() + (written.pdf() == null ? "" : ", " + written.pdf()));
         w.flush();
         return 0;
+    }
+
+    private static boolean isArchive(Path file) {
+        return file.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(ArchiveFormat.EXTENSION);
     }
 
     private static String describe(LoadedModel<Classifier> m, Path file) {

@@ -190,6 +190,9 @@ final class ReportPage {
             qualityFact("Rows skipped", q.rowsSkippedTotal() == 0 ? "none of " + q.rowsRead()
                     : q.rowsSkippedTotal() + " of " + q.rowsRead() + ": " + joined(q.rowsSkipped()),
                     q.rowsSkippedTotal() > 0, "rows-skipped", Long.toString(q.rowsSkippedTotal()));
+        } else if (!q.rowsSkipped().isEmpty()) {
+            qualityFact("Packets or frames left aside", joined(q.rowsSkipped()), true, "rejected",
+                    Long.toString(q.rowsSkippedTotal()));
         }
         qualityFact("Unreadable cells", q.unreadableTotal() == 0 ? "none"
                 : q.unreadableTotal() + ": " + joined(q.unreadableCells()) + " (set to NaN)",
@@ -205,7 +208,8 @@ final class ReportPage {
         if (!q.ignoredColumns().isEmpty()) {
             fact("Columns not in the dictionary", String.join(", ", q.ignoredColumns()) + " (ignored)");
         }
-        qualityFact("Read to the end", q.complete() ? "yes" : "NO: reading stopped before the end", !q.complete(),
+        qualityFact("Read to the end", q.complete() ? "yes" : "NO: reading stopped before the end, or the end was "
+                + "cut (see below)", !q.complete(),
                 "complete", Boolean.toString(q.complete()));
         h.close("table");
         if (!q.problems().isEmpty()) {
