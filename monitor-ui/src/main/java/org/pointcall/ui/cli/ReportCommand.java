@@ -42,7 +42,8 @@ import picocli.CommandLine.Model.CommandSpec;
         })
 public final class ReportCommand implements Callable<Integer> {
 
-    @Option(names = "--input", paramLabel = "FILE", description = "recorded sortie (.csv, .xlsx) or sortie archive (.pcsa)")
+    @Option(names = "--input", paramLabel = "FILE",
+            description = "recorded sortie (.csv, .xlsx) or sortie archive (.pcsa)")
     Path input;
 
     @Option(names = "--results", paramLabel = "DIR", description = "folder with points.json (from analyze or monitor)")
@@ -52,7 +53,8 @@ public final class ReportCommand implements Callable<Integer> {
     Path cardFile;
 
     @Option(names = "--dictionary", paramLabel = "DICT",
-            description = "parameter dictionary (default: dictionary.yaml beside the input or the results, else the demo one)")
+            description = "parameter dictionary (default: dictionary.yaml beside the input or the results, else the "
+                    + "demo one)")
     Path dictionaryFile;
 
     @Option(names = "--model", paramLabel = "MODEL", description = "detector model (default: the one in the jar)")
