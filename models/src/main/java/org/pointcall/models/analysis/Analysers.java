@@ -5,7 +5,15 @@ import java.util.List;
 import java.util.Map;
 import java.util.Objects;
 
+import org.pointcall.models.analysis.accel.LevelAccelAnalyser;
+import org.pointcall.models.analysis.doublet.DoubletAnalyser;
+import org.pointcall.models.analysis.loop.LoopAnalyser;
+import org.pointcall.models.analysis.phugoid.PhugoidAnalyser;
+import org.pointcall.models.analysis.roll.AileronRollAnalyser;
+import org.pointcall.models.analysis.sideslip.SideslipAnalyser;
+import org.pointcall.models.analysis.stabilised.StabilisedAnalyser;
 import org.pointcall.models.analysis.stall.StallAnalyser;
+import org.pointcall.models.analysis.windup.WindUpTurnAnalyser;
 import org.pointcall.shared.kind.ManoeuvreKind;
 
 /**
@@ -18,11 +26,14 @@ public final class Analysers {
     static {
         register(new StallAnalyser(ManoeuvreKind.STALL_LEVEL));
         register(new StallAnalyser(ManoeuvreKind.STALL_TURN));
-        for (ManoeuvreKind k : ManoeuvreKind.values()) {
-            if (!BY_KIND.containsKey(k)) {
-                register(new PendingAnalyser(k));
-            }
-        }
+        register(new LoopAnalyser());
+        register(new WindUpTurnAnalyser());
+        register(new LevelAccelAnalyser());
+        register(new DoubletAnalyser());
+        register(new PhugoidAnalyser());
+        register(new SideslipAnalyser());
+        register(new AileronRollAnalyser());
+        register(new StabilisedAnalyser());
         for (ManoeuvreKind k : ManoeuvreKind.values()) {
             if (!BY_KIND.containsKey(k)) {
                 throw new IllegalStateException("no analyser for " + k.key());
@@ -55,8 +66,37 @@ public final class Analysers {
             throw new IllegalArgumentException("a point must end after it begins");
         }
         ManoeuvreAnalyser a = forKind(kind);
-        return a.analyse(history, beginNs, endNs, hints == null ? Map.of() : hints,
+        ManoeuvreResult r = a.analyse(history, beginNs, endNs, hints == null ? Map.of() : hints,
                 bandIntervalsS == null ? Map.of() : bandIntervalsS);
+        String gap = largestGap(history, beginNs, endNs);
+        if (gap == null) {
+            return r;
+        }
+        List<String> notes = new java.util.ArrayList<>(r.notes());
+        notes.add(gap);
+        return new ManoeuvreResult(r.kind(), r.instantsNs(), r.metricsSi(), r.methods(), notes);
+    }
+
+    /** Frames further apart than this within a point are a telemetry gap worth telling the reader about. */
+    public static final double GAP_NOTE_S = 0.25;
+
+    /** A note on the longest gap between frames within the point, or null when none is over {@link #GAP_NOTE_S}. */
+    static String largestGap(PointHistory h, long beginNs, long endNs) {
+        long worst = 0;
+        long at = 0;
+        int i = Math.max(1, h.firstAtOrAfter(beginNs));
+        for (; i < h.size() && h.timeNs(i - 1) <= endNs; i++) {
+            long d = h.timeNs(i) - h.timeNs(i - 1);
+            if (d > worst) {
+                worst = d;
+                at = h.timeNs(i - 1);
+            }
+        }
+        if (worst * 1e-9 <= GAP_NOTE_S) {
+            return null;
+        }
+        return String.format(java.util.Locale.ROOT, "telemetry gap of %.2f s from %.2f s after the begin: metrics "
+                + "over it rest on the data either side", worst * 1e-9, (at - beginNs) * 1e-9);
     }
 
     /** The parameters any analyser reads: what a history kept for analysis should hold. */

@@ -58,7 +58,15 @@ import org.pointcall.shared.outcome.Verdict;
  */
 public final class CardSession {
     /** History kept before a point's begin and while idle, s: covers a begin reported late and rates before it. */
-    public static final double PREROLL_S = 30.0;
+    public static final double PREROLL_S = 60.0;
+    /**
+     * A completed flight of a card point that begins within this of the end of a discarded stretch of the same
+     * point, with nothing between them, is one flight: the detector lost the point for a moment (seen on turning
+     * stalls, whose entry it discarded and whose recovery it kept). It is analysed from the discarded stretch's
+     * begin, and the abandoned record is replaced by it. s.
+     */
+    public static final double REJOIN_S = 15.0;
+    private static final String DISCARDED = "abandoned: the detector discarded it";
     /** Alarm changes kept in a snapshot. */
     public static final int RECENT_ALARMS = 10;
     private static final int NOTICES = 5;
@@ -315,7 +323,7 @@ public final class CardSession {
             if (!cutShort) {
                 String failed = e.evidence().stream().filter(s -> s.startsWith("failed ")).findFirst()
                         .map(s -> s.substring("failed ".length())).orElse("its checks");
-                why.add(new Reason("point", "abandoned: the detector discarded it (" + failed + ")"));
+                why.add(new Reason("point", DISCARDED + " (" + failed + ")"));
             } else {
                 why.add(new Reason("point", "abandoned: the stream ended while the point was being flown"));
             }
@@ -324,7 +332,24 @@ public final class CardSession {
                     e.confidence(), a.point == null ? null : Verdict.INCOMPLETE, a.point == null ? List.of() : why,
                     List.of(), List.of(), a.hints, notes, null);
         } else {
-            o = judge(a, e);
+            long begin = e.beginNs();
+            String joined = null;
+            int k = outcomes.size() - 1;
+            PointOutcome prev = k < 0 ? null : outcomes.get(k);
+            if (a.point != null && prev != null && a.point.id().equals(prev.cardId())
+                    && prev.verdict() == Verdict.INCOMPLETE && !prev.reasons().isEmpty()
+                    && prev.reasons().get(0).text().startsWith(DISCARDED)
+                    && prev.endNs() >= e.beginNs() - Math.round(REJOIN_S * 1e9)
+                    && !history.isEmpty() && prev.beginNs() >= history.firstNs()) {
+                begin = prev.beginNs();
+                outcomes.remove(k);
+                joined = String.format(java.util.Locale.ROOT, "joined with the stretch from %.1f s to %.1f s that "
+                        + "the detector had discarded: one flight of %s", prev.beginNs() / 1e9, prev.endNs() / 1e9,
+                        a.point.id());
+                // the detector's instants were found on the kept stretch alone: the analysis finds them again
+                a.hints.clear();
+            }
+            o = judge(a, e, begin, joined);
         }
         outcomes.add(o);
         if (a.point != null) {
@@ -339,8 +364,11 @@ public final class CardSession {
     }
 
     /** Analysis, bands, verdict of a completed point. */
-    private PointOutcome judge(Active a, PointEvent e) {
+    private PointOutcome judge(Active a, PointEvent e, long beginNs, String joined) {
         List<String> notes = new ArrayList<>();
+        if (joined != null) {
+            notes.add(joined);
+        }
         Map<String, Double> intervals = new HashMap<>();
         if (a.point != null) {
             for (Band b : a.point.bands()) {
@@ -349,7 +377,7 @@ public final class CardSession {
                 }
             }
         }
-        ManoeuvreResult r = analyse(e.kind(), e.beginNs(), e.endNs(), a.hints, intervals, notes);
+        ManoeuvreResult r = analyse(e.kind(), beginNs, e.endNs(), a.hints, intervals, notes);
         Map<String, Long> instants = new LinkedHashMap<>(a.hints);
         instants.putAll(r.instantsNs());
         List<MetricValue> metrics = new ArrayList<>();
@@ -367,22 +395,22 @@ public final class CardSession {
         }
         notes.addAll(r.notes());
         if (a.point == null) {
-            return new PointOutcome(e.pointId(), null, e.kind().key(), a.title(), e.beginNs(), e.endNs(),
+            return new PointOutcome(e.pointId(), null, e.kind().key(), a.title(), beginNs, e.endNs(),
                     e.confidence(), null, List.of(), List.of(), metrics, instants, notes, null);
         }
         List<BandResult> bands = new ArrayList<>();
         List<Reason> reasons = new ArrayList<>();
         for (int i = 0; i < a.point.bands().size(); i++) {
-            PhaseJudge.Judged j = PhaseJudge.judge(a.point, i, history, e.beginNs(), e.endNs(), instants,
+            PhaseJudge.Judged j = PhaseJudge.judge(a.point, i, history, beginNs, e.endNs(), instants,
                     r.metricsSi());
             bands.add(j.result());
             if (j.reason() != null) {
                 reasons.add(j.reason());
             }
         }
-        reasons.addAll(Verdicts.limitReasons(alarms, e.beginNs(), e.endNs()));
+        reasons.addAll(Verdicts.limitReasons(alarms, beginNs, e.endNs()));
         Verdict v = reasons.isEmpty() ? Verdict.GOOD : Verdict.REPEAT;
-        return new PointOutcome(e.pointId(), a.point.id(), e.kind().key(), a.title(), e.beginNs(), e.endNs(),
+        return new PointOutcome(e.pointId(), a.point.id(), e.kind().key(), a.title(), beginNs, e.endNs(),
                 e.confidence(), v, reasons, bands, metrics, instants, notes, null);
     }
 
@@ -631,8 +659,15 @@ public final class CardSession {
                 return;
             }
             String p = band.parameter();
+            Map<String, Long> hints = active.hints;
+            if (band.phase() == BandPhase.THROUGHOUT
+                    && PhaseJudge.throughoutEndNs(point.kind(), hints, Long.MAX_VALUE) < nowNs) {
+                return; // the technique is over (the stall has broken): the band no longer applies
+            }
             if (band.phase() == BandPhase.RATE) {
-                valueSi = PhaseJudge.slope(history, p, nowNs - Math.round(band.overS() * 1e9), nowNs);
+                Long at = hints.get(band.instant());
+                long to = at == null ? nowNs : Math.min(at, nowNs);
+                valueSi = PhaseJudge.slope(history, p, to - Math.round(band.overS() * 1e9), to);
             } else {
                 double v = history.valueSi(p, history.size() - 1);
                 if (Double.isFinite(v)) {

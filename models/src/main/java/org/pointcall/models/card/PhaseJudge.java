@@ -38,7 +38,7 @@ public final class PhaseJudge {
      * it ends within this of the begin, s: a detected begin can lie a few seconds before the technique is set up
      * (the gear still travelling, the bank still being rolled in).
      */
-    public static final double LEAD_IN_S = 5.0;
+    public static final double LEAD_IN_S = 10.0;
     /** Gaps between samples longer than this count only this much towards time outside or inside, s. */
     private static final double MAX_STEP_S = 0.5;
 

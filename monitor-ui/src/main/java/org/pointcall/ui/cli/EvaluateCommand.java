@@ -11,6 +11,7 @@ import org.pointcall.models.detect.DetectorSettings;
 import org.pointcall.models.label.LabelFiles;
 import org.pointcall.models.modelfile.LoadedModel;
 import org.pointcall.models.modelfile.ModelFiles;
+import org.pointcall.models.run.AnalysisAccuracy;
 import org.pointcall.models.run.Evaluation;
 import org.pointcall.models.run.SortieResult;
 import org.pointcall.models.run.SortieSets;
@@ -41,8 +42,16 @@ import picocli.CommandLine.Model.CommandSpec;
 public final class EvaluateCommand implements Callable<Integer> {
 
     @Option(names = "--model", paramLabel = "MODEL",
-            description = "model file (with --verdicts: default the one in the jar)")
+            description = "model file (needed unless --analysis; with --verdicts: default the one in the jar)")
     Path modelFile;
+
+    @Option(names = "--analysis",
+            description = "instead: analyse each truth point of the --data sorties on their noisy telemetry and "
+                    + "print the error of every metric against the truth")
+    boolean analysis;
+
+    @Option(names = "--details", description = "with --analysis: also one line per point and metric")
+    boolean details;
 
     @Option(names = "--data", arity = "1..*", paramLabel = "DIR",
             description = "sortie folders, or folders of sortie folders")
@@ -74,8 +83,22 @@ public final class EvaluateCommand implements Callable<Integer> {
             VerdictCheck.run(w, modelFile, cardFile, dictionaryFile, data);
             return 0;
         }
+        if (analysis) {
+            if (data.isEmpty()) {
+                throw new PointcallException("--analysis needs --data DIR...");
+            }
+            AnalysisAccuracy accuracy = AnalysisAccuracy.run(SortieSets.find(data), this::dictionary);
+            for (String l : details ? accuracy.details() : List.<String>of()) {
+                w.println(l);
+            }
+            for (String l : accuracy.lines()) {
+                w.println(l);
+            }
+            w.flush();
+            return 0;
+        }
         if (modelFile == null) {
-            throw new PointcallException("give --model MODEL");
+            throw new PointcallException("give --model MODEL (or --analysis)");
         }
         if (!Files.isRegularFile(modelFile)) {
             throw new PointcallException(modelFile + ": no such model file");

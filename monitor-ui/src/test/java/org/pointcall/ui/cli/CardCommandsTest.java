@@ -170,7 +170,7 @@ class CardCommandsTest {
         }
         assertFalse(isFree(port), "the monitor listens");
         CommandRun sim = CommandRun.of("simulate", "--card", cardA.toString(), "--seed", "11", "--no-flaws",
-                "--to", "udp://127.0.0.1:" + port, "--speed", "60");
+                "--to", "udp://127.0.0.1:" + port, "--speed", "30");
         assertEquals(0, sim.exitCode(), sim.err());
         t.join(60_000);
         CommandRun m = mon.get();
@@ -190,7 +190,7 @@ class CardCommandsTest {
 
     private static boolean isFree(int port) {
         try (DatagramSocket s = new DatagramSocket(new InetSocketAddress(InetAddress.getLoopbackAddress(), port))) {
-            return true;
+            return s.isBound();
         } catch (BindException e) {
             return false;
         } catch (java.net.SocketException e) {

@@ -119,6 +119,8 @@ public enum ManoeuvreKind {
         }
         List<MetricSpec> all = new java.util.ArrayList<>(common);
         all.add(m("bank-at-break", Unit.DEGREE, "bank angle at the break"));
+        all.add(m("stall-kcas-1g", Unit.KNOT,
+                "1-g equivalent stall speed: KCAS at the break over the square root of the load factor there"));
         return all;
     }
 

@@ -54,7 +54,8 @@ public sealed interface SessionEvent {
         @Override
         public String line() {
             return stamp(timeNs) + "band   " + cardId + " " + phase + " " + subject + ": " + from.key() + " -> "
-                    + to.key() + (value == null ? "" : ", " + Numbers.near(value, 4) + " " + unit) + " (band "
+                    + to.key() + (value == null ? "" : ", " + Numbers.near(value, 4) + ("1".equals(unit) ? "" : " " + unit))
+                    + " (band "
                     + band + ")";
         }
     }

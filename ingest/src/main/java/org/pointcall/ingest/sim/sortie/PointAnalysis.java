@@ -100,6 +100,8 @@ final class PointAnalysis {
                 m.put("recovery-time", tr.time(low) - tr.time(brk));
                 if (kind == ManoeuvreKind.STALL_TURN) {
                     m.put("bank-at-break", tr.get(ROLL, brk));
+                    double n = tr.get(NZ, brk);
+                    m.put("stall-kcas-1g", n > 0.0 ? tr.get(KCAS, brk) / Math.sqrt(n) : Double.NaN);
                 }
                 through = tr.time(brk);
             }
