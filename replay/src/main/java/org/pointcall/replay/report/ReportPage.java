@@ -497,7 +497,12 @@ final class ReportPage {
         h.open("table", "class", "points metrics");
         h.open("thead").open("tr").el("th", "Result", "style", "width: 17%").el("th", "Value", "style", "width: 9%")
                 .el("th", "Unit", "style", "width: 7%").el("th", "How").close("tr").close("thead").open("tbody");
+        List<MetricValue> extras = new ArrayList<>();
         for (MetricValue m : p.metrics()) {
+            if (m.unit().equals("SI")) {
+                extras.add(m); // an analysis's own extra result, left in SI: listed apart, not as a kind's metric
+                continue;
+            }
             String how = m.method();
             if (how.isEmpty() && kind != null) {
                 for (MetricSpec ms : kind.metrics()) {
@@ -512,6 +517,16 @@ final class ReportPage {
                     .el("td", m.unit().equals("1") ? "-" : m.unit()).el("td", how, "class", "how").close("tr");
         }
         h.close("tbody").close("table");
+        if (!extras.isEmpty()) {
+            h.open("p", "class", "extras").text("Further results of the analysis, in SI units: ");
+            for (int i = 0; i < extras.size(); i++) {
+                MetricValue m = extras.get(i);
+                h.text(i == 0 ? "" : ", ");
+                h.el("span", m.name() + " " + Numbers.near(m.value(), 4), "data-point", Long.toString(p.detection()),
+                        "data-metric", m.name(), "data-value", Double.toString(m.value()), "data-unit", m.unit());
+            }
+            h.text(".").close("p");
+        }
     }
 
     private void closing() {

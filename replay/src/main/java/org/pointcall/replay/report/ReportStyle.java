@@ -52,6 +52,7 @@ final class ReportStyle {
             div.point { page-break-before: always; }
             div.figure { margin: 4pt 0; page-break-inside: avoid; }
             img.figure { width: 100%%; }
+            p.extras { font-size: 8pt; color: #444444; }
             div.why { color: #8a2a00; margin: 3pt 0; }
             div.closing { page-break-before: always; }
             a { color: #1f3b73; text-decoration: none; }
