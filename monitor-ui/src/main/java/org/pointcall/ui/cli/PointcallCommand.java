@@ -33,6 +33,7 @@ import picocli.CommandLine.Command;
             AnalyzeCommand.class,
             MonitorCommand.class,
             NextCardCommand.class,
+            ReportCommand.class,
             BenchCommand.class,
             DemoCommand.class,
             ConsoleCommand.class,
