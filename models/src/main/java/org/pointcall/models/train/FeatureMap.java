@@ -47,6 +47,8 @@ public final class FeatureMap implements Serializable {
      * {@link #LEVELS}, its baseline is its mean over its longest window; the mean, min and max of every window become
      * differences from that baseline (the baseline itself is left out), and for {@link #SCALED} ones every statistic
      * is then divided by the baseline. Features of other parameters, and names of another shape, pass unchanged.
+     * Last come the ranges, {@code max - min} of every window that has both (divided by the baseline for scaled
+     * parameters).
      */
     public static FeatureMap relative(List<String> rawNames) {
         Map<String, Integer> baseline = new HashMap<>();
@@ -85,6 +87,26 @@ public final class FeatureMap implements Serializable {
             sub.add(level ? b : -1);
             div.add(scaled ? b : -1);
             out.add(name + (level ? "-base" : "") + (scaled ? "/base" : ""));
+        }
+        // the spread of every window, max - min: a reversal's size in one number, whatever the level it rides on
+        Map<String, Integer> index = new HashMap<>();
+        for (int i = 0; i < rawNames.size(); i++) {
+            index.put(rawNames.get(i), i);
+        }
+        for (int i = 0; i < rawNames.size(); i++) {
+            String[] p = parts(rawNames.get(i));
+            if (p == null || !p[1].equals("max")) {
+                continue;
+            }
+            Integer min = index.get(p[0] + ".min." + p[2]);
+            if (min == null) {
+                continue;
+            }
+            boolean scaled = SCALED.contains(p[0]) && baseline.containsKey(p[0]);
+            src.add(i);
+            sub.add(min);
+            div.add(scaled ? baseline.get(p[0]) : -1);
+            out.add(p[0] + ".range." + p[2] + (scaled ? "/base" : ""));
         }
         int n = src.size();
         int[] s = new int[n];
