@@ -40,7 +40,8 @@ import picocli.CommandLine.Model.CommandSpec;
         })
 public final class EvaluateCommand implements Callable<Integer> {
 
-    @Option(names = "--model", required = true, paramLabel = "MODEL", description = "model file")
+    @Option(names = "--model", paramLabel = "MODEL",
+            description = "model file (default: the model shipped in the jar)")
     Path modelFile;
 
     @Option(names = "--data", arity = "1..*", paramLabel = "DIR",
@@ -63,7 +64,7 @@ public final class EvaluateCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         PrintWriter w = spec.commandLine().getOut();
-        if (!Files.isRegularFile(modelFile)) {
+        if (modelFile != null && !Files.isRegularFile(modelFile)) {
             throw new PointcallException(modelFile + ": no such model file");
         }
         if (data.isEmpty() && recording == null) {
@@ -73,7 +74,9 @@ public final class EvaluateCommand implements Callable<Integer> {
             throw new PointcallException("--recording and --labels go together");
         }
         List<Path> sorties = data.isEmpty() ? List.of() : SortieSets.find(data);
-        LoadedModel<Classifier> model = ModelFiles.load(modelFile, Classifier.class);
+        LoadedModel<Classifier> model = modelFile == null ? ShippedModel.load()
+                : ModelFiles.load(modelFile, Classifier.class);
+        w.println("model: " + (modelFile == null ? ShippedModel.NAME : modelFile.toString()));
         List<SortieResult> results = new ArrayList<>();
         if (recording != null) {
             ParameterDictionary dict = dictionaryFile == null ? DemoFiles.dictionary()
