@@ -42,7 +42,6 @@ import org.pointcall.shared.units.Units;
  * is copied so that several scorers may share one model.
  */
 public final class StreamingScorer {
-    private static final boolean TRACE = Boolean.getBoolean("pointcall.trace");
     private final Classifier classifier;
     private final ModelDescription model;
     private final ParameterDictionary dictionary;
@@ -175,11 +174,6 @@ public final class StreamingScorer {
         }
 
         void onEvent(PointEvent e) {
-            if (TRACE) {
-                System.err.printf(java.util.Locale.ROOT, "TRACE %s %s %s %.2f %.2f @%.2f %s%n", e.type(), e.kind(),
-                        e.pointId(), e.beginNs() * 1e-9, e.endNs() == PointEvent.UNKNOWN_NS ? Double.NaN
-                        : e.endNs() * 1e-9, e.reportedAtNs() * 1e-9, e.evidence());
-            }
             switch (e.type()) {
                 // begunAtNs is the BEGUN event's reportedAtNs: the live report of the point
                 case ENDED -> detected.add(new DetectedPoint(e.kind(), Units.nsToSeconds(e.beginNs()),

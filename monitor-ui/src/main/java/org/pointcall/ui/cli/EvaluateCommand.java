@@ -76,7 +76,6 @@ public final class EvaluateCommand implements Callable<Integer> {
         List<Path> sorties = data.isEmpty() ? List.of() : SortieSets.find(data);
         LoadedModel<Classifier> model = modelFile == null ? ShippedModel.load()
                 : ModelFiles.load(modelFile, Classifier.class);
-        w.println("model: " + (modelFile == null ? ShippedModel.NAME : modelFile.toString()));
         List<SortieResult> results = new ArrayList<>();
         if (recording != null) {
             ParameterDictionary dict = dictionaryFile == null ? DemoFiles.dictionary()
@@ -94,6 +93,7 @@ public final class EvaluateCommand implements Callable<Integer> {
         for (String l : e.lines()) {
             w.println(l);
         }
+        w.println("model: " + (modelFile == null ? ShippedModel.NAME : modelFile.toString()));
         w.flush();
         return 0;
     }

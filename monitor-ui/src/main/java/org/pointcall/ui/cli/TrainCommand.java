@@ -36,7 +36,8 @@ import picocli.CommandLine.Model.CommandSpec;
         description = {
             "Reads each sortie (a folder with sortie.csv and truth.json, or a folder of such folders) through",
             "the live pipeline's stages (read, derive, sliding windows of KCAS, Hp, AoA, AoS, Pitch, Roll,",
-            "P, Q, Nz and Elevator over 1, 4 and 12 s), cross-validates by sortie, scores the held-out",
+            "P, Q, Nz and Elevator over 1, 4 and 12 s, KCAS, Hp, AoA and Elevator also over 30 s), cross-validates",
+            "by sortie, scores the held-out",
             "sorties, fits the final model on the rest and writes MODEL; beside it MODEL-report.txt (the",
             "report's name: value lines, also printed), ranking.csv and ranking.png (features against classes).",
             "Progress goes to standard error: a bar on a terminal, plain lines otherwise."
@@ -70,6 +71,11 @@ public final class TrainCommand implements Callable<Integer> {
             description = "with --compare: predictions timed per classifier for its cost (0: skip; default:"
                     + " ${DEFAULT-VALUE})")
     long costCalls;
+
+    @Option(names = "--thin", paramLabel = "N", defaultValue = "1",
+            description = "with --compare: keep every N-th decision tick of each sortie (neighbouring ticks are nearly"
+                    + " the same row; default: ${DEFAULT-VALUE}, all)")
+    int thin;
 
     @Spec
     CommandSpec spec;
@@ -120,6 +126,16 @@ public final class TrainCommand implements Callable<Integer> {
         }
         LabelledRows rows = ModelTraining.rows(sorties, dict, ModelTraining.datasetSettings(FeatureWindows.standard()),
                 bar.within(0, 0.2, ""));
+        if (thin < 1) {
+            throw new PointcallException("--thin must be 1 or more, got " + thin);
+        }
+        if (thin > 1) {
+            int[] keep = new int[(rows.rows() + thin - 1) / thin];
+            for (int i = 0; i < keep.length; i++) {
+                keep[i] = i * thin;
+            }
+            rows = rows.select(keep);
+        }
         if (rows.rows() == 0) {
             throw new PointcallException("the sorties gave no complete decision tick to compare on");
         }
@@ -127,9 +143,10 @@ public final class TrainCommand implements Callable<Integer> {
         List<String> lines = new ArrayList<>();
         lines.add("# Classifiers and balance methods side by side");
         lines.add("");
-        lines.add(String.format(Locale.ROOT, "%d sorties, %d rows, %d features (%s), %d folds by sortie, seed %d.",
-                rows.sorties().size(), rows.rows(), rows.featureCount(), settings.features().key(), settings.folds(),
-                settings.seed()));
+        lines.add(String.format(Locale.ROOT, "%d sorties, %d rows (every %d. tick), %d features (%s), %d folds by"
+                + " sortie, seed %d. Row-level scores of the cross-validation; cost per prediction on one thread.",
+                rows.sorties().size(), rows.rows(), thin, rows.featureCount(), settings.features().key(),
+                settings.folds(), settings.seed()));
         lines.add("");
         lines.addAll(r.table());
         Files.write(out, lines, StandardCharsets.UTF_8);
