@@ -13,6 +13,8 @@ import org.pointcall.shared.kind.ManoeuvreKind;
  */
 final class DoubletQReversalRule extends GuardRule {
     static final int CAP = 16;
+    /** Look-back before the candidate's start, s. */
+    static final double LEAD_S = 4.0;
     private static final int MAX_Q = 0;
     private static final int LOBES = 1;
     private static final int FIRST = 2;
@@ -26,6 +28,15 @@ final class DoubletQReversalRule extends GuardRule {
         this.floor = g.doubletQFloorRadS();
         this.fraction = g.doubletLobeFraction();
         this.needed = g.doubletReversals();
+    }
+
+    /**
+     * The input's first lobe, and with it the first reversal, often lies before the classifier's probability rises
+     * (it sees the response more than the input); a doublet input lasts at most a few seconds.
+     */
+    @Override
+    public double leadS() {
+        return LEAD_S;
     }
 
     @Override
@@ -104,6 +115,22 @@ final class DoubletQReversalRule extends GuardRule {
         }
         return "pitch rate reversed " + reversals(v) + " times (needs " + needed + "), largest |Q| "
                 + deg(v[MAX_Q]) + " deg/s";
+    }
+
+    /** The start of the first counted lobe: where the input began. */
+    @Override
+    protected long onset(double[] v, long[] t) {
+        int n = (int) v[LOBES];
+        double largest = 0;
+        for (int i = 0; i < n; i++) {
+            largest = Math.max(largest, v[FIRST + 2 * i + 1]);
+        }
+        for (int i = 0; i < n; i++) {
+            if (v[FIRST + 2 * i + 1] >= fraction * largest) {
+                return t[i];
+            }
+        }
+        return PointEvent.UNKNOWN_NS;
     }
 
     @Override

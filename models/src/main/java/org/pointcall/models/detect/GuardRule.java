@@ -82,6 +82,29 @@ public abstract class GuardRule {
         return judge(v, t);
     }
 
+    /**
+     * How far before its candidate's start the rule wants to look, s: a rule whose evidence can precede the
+     * classifier's rise (a doublet's first lobe) is given the recent frames again when a candidate starts, as far
+     * back as this and the detector's frame history reach. 0 by default: from the start on.
+     */
+    public double leadS() {
+        return 0.0;
+    }
+
+    /**
+     * Where the point physically began by this rule, on the point as last marked (for example a doublet's first
+     * input lobe); {@link PointEvent#UNKNOWN_NS} when the rule does not say. The detector moves an earlier begin
+     * there when the rule passed.
+     */
+    public final long onsetNs() {
+        return onset(keptV, keptT);
+    }
+
+    /** The onset of one copy of the state; none by default. */
+    protected long onset(double[] values, long[] times) {
+        return PointEvent.UNKNOWN_NS;
+    }
+
     /** Whether a live {@code PASSED} may confirm an open point (false for rules that only a whole hold can judge). */
     public boolean confirmsLive() {
         return true;

@@ -57,6 +57,19 @@ public final class PhysicalState {
         return sampledNs[q.ordinal()];
     }
 
+    /** Copies every value and sample time into {@code v} and {@code s} from {@code offset}. */
+    void copyTo(double[] v, long[] s, int offset) {
+        System.arraycopy(values, 0, v, offset, values.length);
+        System.arraycopy(sampledNs, 0, s, offset, sampledNs.length);
+    }
+
+    /** Becomes the state {@link #copyTo} saved, at instant {@code nowNs}. */
+    void loadFrom(long nowNs, double[] v, long[] s, int offset) {
+        timeNs = nowNs;
+        System.arraycopy(v, offset, values, 0, values.length);
+        System.arraycopy(s, offset, sampledNs, 0, sampledNs.length);
+    }
+
     public double aoaRad() {
         return values[PhysicalQuantity.AOA.ordinal()];
     }

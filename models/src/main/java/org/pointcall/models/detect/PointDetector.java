@@ -44,6 +44,14 @@ public final class PointDetector implements Detector {
     private final long[] keptCount;
     private final double[] smoothed;
     private final String[] features = new String[MAX_FEATURES];
+    /** Frames kept for rules that look back ({@link GuardRule#leadS()}): a ring of whole physical states. */
+    static final int HISTORY_FRAMES = 1024;
+    private final long[] historyNs = new long[HISTORY_FRAMES];
+    private final double[] historyValues = new double[HISTORY_FRAMES * PhysicalQuantity.COUNT];
+    private final long[] historySampledNs = new long[HISTORY_FRAMES * PhysicalQuantity.COUNT];
+    private int historyNext;
+    private int historySize;
+    private final PhysicalState replay = new PhysicalState();
 
     private final long maxRefineNs;
     private final long mergeGapNs;
@@ -149,6 +157,8 @@ public final class PointDetector implements Detector {
         switchNote = null;
         smoother.reset();
         state.clear();
+        historyNext = 0;
+        historySize = 0;
         for (int c : kindClasses) {
             channel[c].reset();
             edge[c].reset();
@@ -166,6 +176,12 @@ public final class PointDetector implements Detector {
         }
         lastFrameNs = t;
         binder.fill(frame, state);
+        historyNs[historyNext] = t;
+        state.copyTo(historyValues, historySampledNs, historyNext * PhysicalQuantity.COUNT);
+        historyNext = (historyNext + 1) % HISTORY_FRAMES;
+        if (historySize < HISTORY_FRAMES) {
+            historySize++;
+        }
         for (int c : kindClasses) {
             if (tracking(c)) {
                 GuardRule[] rs = rules[c];
@@ -238,11 +254,27 @@ public final class PointDetector implements Detector {
         GuardRule[] rs = rules[c];
         for (int r = 0; r < rs.length; r++) {
             rs[r].start(atNs);
+            if (atNs != NONE && rs[r].leadS() > 0) {
+                lookBack(rs[r], atNs - Math.round(rs[r].leadS() * 1e9));
+            }
         }
         confSum[c] = 0;
         confCount[c] = 0;
         keptSum[c] = 0;
         keptCount[c] = 0;
+    }
+
+    /** Gives {@code rule} the kept frames from {@code fromNs} on, oldest first (what the frames so far showed). */
+    private void lookBack(GuardRule rule, long fromNs) {
+        int oldest = (historyNext - historySize + HISTORY_FRAMES) % HISTORY_FRAMES;
+        for (int i = 0; i < historySize; i++) {
+            int slot = (oldest + i) % HISTORY_FRAMES;
+            if (historyNs[slot] < fromNs) {
+                continue;
+            }
+            replay.loadFrom(historyNs[slot], historyValues, historySampledNs, slot * PhysicalQuantity.COUNT);
+            rule.onState(replay);
+        }
     }
 
     private void tickGap() {
@@ -436,6 +468,16 @@ public final class PointDetector implements Detector {
         if (merges > 0) {
             ev.add("merged across " + merges + (merges == 1 ? " gap" : " gaps") + " up to " + settings.mergeGapS()
                     + " s");
+        }
+        // a rule that found the manoeuvre's physical onset before the classifier's rise moves the begin there
+        for (GuardRule r : rules[k]) {
+            long onset = r.onsetNs();
+            if (onset != PointEvent.UNKNOWN_NS && onset < beginNs && (lastEndNs == NONE || onset >= lastEndNs)
+                    && r.outcome() == RuleOutcome.PASSED) {
+                ev.add("begin moved to " + r.name() + " onset at " + seconds(onset) + " s from " + seconds(beginNs)
+                        + " s");
+                beginNs = onset;
+            }
         }
         boolean ok = true;
         double durationS = (end - beginNs) / 1e9;

@@ -118,9 +118,11 @@ public final class ModelTraining {
                 LabelledRows.CLASS_NAMES, Trainer.summary(rows, run));
         progress.progress(0.96, "writing " + modelFile);
         ModelMetadata metadata = ModelFiles.write(modelFile, model, c, created);
+        // ranked in the features the model itself was fitted on
+        LabelledRows ranked = c.featureMap() == null ? rows : c.featureMap().apply(rows);
         FeatureRanking ranking = c instanceof ForestClassifier f
-                ? FeatureRanking.withImportance(rows, f.importance())
-                : FeatureRanking.correlations(rows);
+                ? FeatureRanking.withImportance(ranked, f.importance())
+                : FeatureRanking.correlations(ranked);
         progress.progress(1.0, "done");
         return new Result(rows, run, model, ranking, metadata);
     }

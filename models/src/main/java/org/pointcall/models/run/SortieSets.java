@@ -13,6 +13,7 @@ import java.util.stream.Stream;
 import org.pointcall.ingest.file.CsvWriter;
 import org.pointcall.ingest.sim.SortieSimulator;
 import org.pointcall.ingest.sim.airframe.Airframe;
+import org.pointcall.ingest.sim.airframe.AirframeVariation;
 import org.pointcall.ingest.sim.airframe.Airframes;
 import org.pointcall.ingest.sim.pilot.PilotSettings;
 import org.pointcall.ingest.sim.sensor.SensorSettings;
@@ -46,11 +47,26 @@ public final class SortieSets {
      * @param frameRateHz telemetry frame rate
      * @param sensors     instrumentation (noise, dropouts) or clean
      * @param pilot       deliberate bad entries or none
+     * @param variation   random variants of each airframe, one per sortie ({@link AirframeVariation#NONE}: the
+     *                    profiles as they are); when it varies, the pilot's tracking error scale is drawn per sortie
+     *                    from the same spread too
      */
-    public record Flying(double frameRateHz, SensorSettings sensors, PilotSettings pilot) {
+    public record Flying(double frameRateHz, SensorSettings sensors, PilotSettings pilot,
+                         AirframeVariation variation) {
         public Flying {
             Objects.requireNonNull(sensors, "sensors");
             Objects.requireNonNull(pilot, "pilot");
+            Objects.requireNonNull(variation, "variation");
+        }
+
+        /** The airframe profiles as they are. */
+        public Flying(double frameRateHz, SensorSettings sensors, PilotSettings pilot) {
+            this(frameRateHz, sensors, pilot, AirframeVariation.NONE);
+        }
+
+        /** A copy whose airframes vary by {@code v}. */
+        public Flying withVariation(AirframeVariation v) {
+            return new Flying(frameRateHz, sensors, pilot, v);
         }
 
         /** 64 Hz, noisy sensors with dropouts, a pilot with flaws: as the {@code simulate} command's defaults. */
@@ -103,11 +119,51 @@ public final class SortieSets {
         return dirs;
     }
 
+    /** Seed of a sortie's airframe variant: apart from the flight's own seed, so the two draws are unrelated. */
+    static long variantSeed(long sortieSeed) {
+        return sortieSeed * 0x9E3779B97F4A7C15L + 0x632BE59BD9B4E019L;
+    }
+
+    /** Variants tried per sortie before giving up: a drawn variant may be unable to trim or fly the card. */
+    static final int VARIANT_ATTEMPTS = 5;
+
     private static SortieTruth flyOne(Airframe airframe, TestCard card, ParameterDictionary dictionary, long seed,
                                       Flying flying, Path dir, String sortieName) throws IOException {
         Files.createDirectories(dir);
-        SortieSimulator sim = new SortieSimulator(airframe, card, dictionary, seed, flying.frameRateHz(),
-                flying.sensors(), flying.pilot());
+        AirframeVariation v = flying.variation();
+        if (!v.varies()) {
+            return flyAs(airframe, flying.pilot(), card, dictionary, seed, flying, dir, sortieName);
+        }
+        // a variant the simulated pilot cannot fly (no trim, or a departure it does not recover from) is drawn
+        // again: the set is meant to hold flyable aircraft of the type, not to test the pilot's limits
+        PointcallException last = null;
+        for (int k = 0; k < VARIANT_ATTEMPTS; k++) {
+            long vs = variantSeed(seed) + k;
+            Airframe flown;
+            try {
+                flown = v.apply(airframe, vs);
+            } catch (IllegalArgumentException e) {
+                last = new PointcallException(airframe.name() + " variant " + vs + ": " + e.getMessage());
+                continue;
+            }
+            double u = new java.util.SplittableRandom(~vs).nextDouble();
+            PilotSettings pilot = flying.pilot().withTrackingErrorScale(
+                    flying.pilot().trackingErrorScale() * (1.0 + v.spread() * (2.0 * u - 1.0)));
+            try {
+                return flyAs(flown, pilot, card, dictionary, seed, flying, dir, sortieName);
+            } catch (PointcallException e) {
+                last = e;
+            }
+        }
+        throw new PointcallException(sortieName + ": no flyable variant of " + airframe.name() + " in "
+                + VARIANT_ATTEMPTS + " draws; last: " + last.getMessage(), last);
+    }
+
+    private static SortieTruth flyAs(Airframe flown, PilotSettings pilot, TestCard card,
+                                     ParameterDictionary dictionary, long seed, Flying flying, Path dir,
+                                     String sortieName) throws IOException {
+        SortieSimulator sim = new SortieSimulator(flown, card, dictionary, seed, flying.frameRateHz(),
+                flying.sensors(), pilot);
         SortieTruth t;
         try (CsvWriter csv = CsvWriter.create(dir.resolve(DatasetBuilder.SIM_RECORDING), dictionary)) {
             t = sim.run(List.of(csv));

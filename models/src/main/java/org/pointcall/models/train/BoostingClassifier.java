@@ -20,7 +20,7 @@ public final class BoostingClassifier extends Classifier {
 
     private BoostingClassifier(TrainingData data, FeaturePrep prep, BoostingSettings settings,
                                GradientTreeBoost model) {
-        super(ClassifierKind.BOOSTING, data.featureNames, data.outputClass, prep, data.rowsPerClass,
+        super(ClassifierKind.BOOSTING, data.featureNames, data.map, data.outputClass, prep, data.rowsPerClass,
                 settings.asMap());
         this.model = model;
     }

@@ -27,6 +27,8 @@ public abstract class Classifier implements Serializable, Cloneable {
 
     private final ClassifierKind kind;
     private final String[] featureNames;
+    /** Null: the model reads the extractor's features as they are (and files written before it existed). */
+    private final FeatureMap map;
     /** Class index (of {@link LabelledRows#CLASS_NAMES}) of each of the model's outputs, ascending. */
     private final int[] outputClass;
     private final FeaturePrep prep;
@@ -34,6 +36,7 @@ public abstract class Classifier implements Serializable, Cloneable {
     private final String[] settingKeys;
     private final String[] settingValues;
 
+    private transient double[] mapped;
     private transient double[] prepared;
     private transient double[] outputs;
 
@@ -41,18 +44,24 @@ public abstract class Classifier implements Serializable, Cloneable {
      * @param outputClass class index of each model output, ascending
      * @param trainingRowsPerClass rows of each class the model was fitted on (after balancing)
      */
-    Classifier(ClassifierKind kind, List<String> featureNames, int[] outputClass, FeaturePrep prep,
+    Classifier(ClassifierKind kind, List<String> featureNames, FeatureMap map, int[] outputClass, FeaturePrep prep,
                long[] trainingRowsPerClass, Map<String, String> settings) {
         this.kind = Objects.requireNonNull(kind, "kind");
         this.featureNames = featureNames.toArray(new String[0]);
+        this.map = map;
+        if (map != null && map.inputCount() != this.featureNames.length) {
+            throw new IllegalArgumentException("feature map reads " + map.inputCount() + " features, the model "
+                    + this.featureNames.length);
+        }
         this.outputClass = outputClass.clone();
         this.prep = Objects.requireNonNull(prep, "prep");
         this.trainingRowsPerClass = trainingRowsPerClass.clone();
         this.settingKeys = settings.keySet().toArray(new String[0]);
         this.settingValues = settings.values().toArray(new String[0]);
-        if (prep.featureCount() != this.featureNames.length) {
+        int modelFeatures = map == null ? this.featureNames.length : map.outputCount();
+        if (prep.featureCount() != modelFeatures) {
             throw new IllegalArgumentException("prep has " + prep.featureCount() + " features, the model "
-                    + this.featureNames.length);
+                    + modelFeatures);
         }
     }
 
@@ -66,6 +75,16 @@ public abstract class Classifier implements Serializable, Cloneable {
 
     public final int featureCount() {
         return featureNames.length;
+    }
+
+    /** The features the model itself was fitted on: {@link #featureNames()} mapped, or those when unmapped. */
+    public final List<String> modelFeatureNames() {
+        return map == null ? featureNames() : map.outputNames();
+    }
+
+    /** What the model does to the extractor's features first, null for nothing. */
+    public final FeatureMap featureMap() {
+        return map;
     }
 
     /** Length of the posterior array {@link #predict} fills: every class of {@link LabelledRows#CLASS_NAMES}. */
@@ -120,10 +139,16 @@ public abstract class Classifier implements Serializable, Cloneable {
                     + " features needed");
         }
         if (prepared == null) {
-            prepared = new double[featureNames.length];
+            prepared = new double[prep.featureCount()];
+            mapped = map == null ? null : new double[map.outputCount()];
             outputs = new double[outputClass.length];
         }
-        prep.apply(features, prepared);
+        if (map == null) {
+            prep.apply(features, prepared);
+        } else {
+            map.apply(features, mapped);
+            prep.apply(mapped, prepared);
+        }
         predictOutputs(prepared, outputs);
         Arrays.fill(posterior, 0.0);
         int best = 0;
@@ -162,6 +187,7 @@ public abstract class Classifier implements Serializable, Cloneable {
         try {
             Classifier c = (Classifier) super.clone();
             c.prepared = null;
+            c.mapped = null;
             c.outputs = null;
             c.resetBuffers();
             return c;

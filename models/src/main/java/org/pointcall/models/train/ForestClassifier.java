@@ -28,7 +28,7 @@ public final class ForestClassifier extends Classifier {
     private transient double[] leaf;
 
     private ForestClassifier(TrainingData data, FeaturePrep prep, ForestSettings settings, RandomForest forest) {
-        super(ClassifierKind.FOREST, data.featureNames, data.outputClass, prep, data.rowsPerClass, settings.asMap());
+        super(ClassifierKind.FOREST, data.featureNames, data.map, data.outputClass, prep, data.rowsPerClass, settings.asMap());
         this.forest = forest;
     }
 

@@ -13,7 +13,7 @@ public final class LogisticClassifier extends Classifier {
 
     private LogisticClassifier(TrainingData data, FeaturePrep prep, LogisticSettings settings,
                                LogisticRegression model) {
-        super(ClassifierKind.LOGISTIC, data.featureNames, data.outputClass, prep, data.rowsPerClass,
+        super(ClassifierKind.LOGISTIC, data.featureNames, data.map, data.outputClass, prep, data.rowsPerClass,
                 settings.asMap());
         this.model = model;
     }

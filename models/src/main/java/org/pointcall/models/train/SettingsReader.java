@@ -19,7 +19,7 @@ import org.yaml.snakeyaml.nodes.ScalarNode;
  */
 final class SettingsReader {
     static final List<String> TOP_KEYS = List.of("classifier", "seed", "folds", "balance", "hold-out", "forest",
-            "boosting", "logistic", "svm");
+            "boosting", "logistic", "svm", "features");
     static final List<String> BALANCE_KEYS = List.of("method", "ratio", "neighbours", "distance");
     static final List<String> HOLD_OUT_KEYS = List.of("airframes", "sorties");
     static final List<String> FOREST_KEYS = List.of("trees", "max-depth", "max-nodes", "node-size",
@@ -87,6 +87,16 @@ final class SettingsReader {
                     return c;
                 }).orElse(null)
                 : base.classifier();
+        FeatureForm features = m.has("features") || base == null
+                ? m.requiredString("features").flatMap(k -> {
+                    Optional<FeatureForm> f = FeatureForm.byKey(k);
+                    if (f.isEmpty()) {
+                        doc.problem(m.node("features").orElseThrow(), "unknown features '" + k
+                                + "'; expected one of: " + String.join(", ", FeatureForm.keys()));
+                    }
+                    return f;
+                }).orElse(null)
+                : base.features();
         Long seed = seed(m);
         Integer folds = integer(m, "folds", base == null ? null : base.folds(), 2);
         BalanceSettings balance = section(m, "balance", base == null ? null : base.balance(), this::balance);
@@ -111,10 +121,12 @@ final class SettingsReader {
                     + classifier.key());
         }
         if (doc.hasProblems() || classifier == null || seed == null || folds == null || balance == null
-                || holdOut == null || forest == null || boosting == null || logistic == null || svm == null) {
+                || holdOut == null || forest == null || boosting == null || logistic == null || svm == null
+                || features == null) {
             return null;
         }
-        return new TrainerSettings(classifier, balance, folds, holdOut, seed, forest, boosting, logistic, svm);
+        return new TrainerSettings(classifier, balance, folds, holdOut, seed, forest, boosting, logistic, svm,
+                features);
     }
 
     private interface SectionReader<T> {

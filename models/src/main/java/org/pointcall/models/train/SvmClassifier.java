@@ -32,7 +32,7 @@ public final class SvmClassifier extends Classifier {
 
     private SvmClassifier(TrainingData data, FeaturePrep prep, SvmSettings settings, OneVersusRest<double[]> model,
                           int fittedRows, int calibrationRowsUsed) {
-        super(ClassifierKind.SVM, data.featureNames, data.outputClass, prep, data.rowsPerClass, settings.asMap());
+        super(ClassifierKind.SVM, data.featureNames, data.map, data.outputClass, prep, data.rowsPerClass, settings.asMap());
         this.model = model;
         this.fittedRows = fittedRows;
         this.calibrationRowsUsed = calibrationRowsUsed;

@@ -36,7 +36,7 @@ public final class Trainer {
 
     /** Fits a classifier of {@code kind} on rows already balanced by {@code balance}. */
     static Classifier fit(LabelledRows balanced, ClassifierKind kind, BalanceSettings balance, TrainerSettings s) {
-        TrainingData data = new TrainingData(balanced);
+        TrainingData data = new TrainingData(balanced, s.features().mapFor(balanced.featureNames()));
         return switch (kind) {
             case FOREST -> ForestClassifier.fit(data, s.forest(),
                     balance.method() == BalanceMethod.CLASS_WEIGHTS, s.seed());

@@ -18,10 +18,11 @@ import org.pointcall.shared.yaml.YamlDoc;
  * @param folds      folds of the cross-validation by sortie, at least 2
  * @param holdOut    the held-out sorties, possibly none
  * @param seed       seed of every random choice
+ * @param features   what the classifiers are fitted on: the extractor's features as they are or relative ones
  */
 public record TrainerSettings(ClassifierKind classifier, BalanceSettings balance, int folds,
                               HoldOutSettings holdOut, long seed, ForestSettings forest, BoostingSettings boosting,
-                              LogisticSettings logistic, SvmSettings svm) {
+                              LogisticSettings logistic, SvmSettings svm, FeatureForm features) {
     /** Name of the default config resource, beside this class. */
     public static final String DEFAULT_RESOURCE = "training-default.yaml";
 
@@ -33,6 +34,7 @@ public record TrainerSettings(ClassifierKind classifier, BalanceSettings balance
         Objects.requireNonNull(boosting, "boosting");
         Objects.requireNonNull(logistic, "logistic");
         Objects.requireNonNull(svm, "svm");
+        Objects.requireNonNull(features, "features");
         TreeChecks.atLeast("folds", folds, 2);
         if (!balance.supports(classifier)) {
             throw new IllegalArgumentException("balance " + balance.method().key() + " is for the forest only, not "
@@ -60,39 +62,43 @@ public record TrainerSettings(ClassifierKind classifier, BalanceSettings balance
     }
 
     public TrainerSettings withClassifier(ClassifierKind k) {
-        return new TrainerSettings(k, balance, folds, holdOut, seed, forest, boosting, logistic, svm);
+        return new TrainerSettings(k, balance, folds, holdOut, seed, forest, boosting, logistic, svm, features);
     }
 
     public TrainerSettings withBalance(BalanceSettings b) {
-        return new TrainerSettings(classifier, b, folds, holdOut, seed, forest, boosting, logistic, svm);
+        return new TrainerSettings(classifier, b, folds, holdOut, seed, forest, boosting, logistic, svm, features);
     }
 
     public TrainerSettings withFolds(int k) {
-        return new TrainerSettings(classifier, balance, k, holdOut, seed, forest, boosting, logistic, svm);
+        return new TrainerSettings(classifier, balance, k, holdOut, seed, forest, boosting, logistic, svm, features);
     }
 
     public TrainerSettings withHoldOut(HoldOutSettings h) {
-        return new TrainerSettings(classifier, balance, folds, h, seed, forest, boosting, logistic, svm);
+        return new TrainerSettings(classifier, balance, folds, h, seed, forest, boosting, logistic, svm, features);
     }
 
     public TrainerSettings withSeed(long s) {
-        return new TrainerSettings(classifier, balance, folds, holdOut, s, forest, boosting, logistic, svm);
+        return new TrainerSettings(classifier, balance, folds, holdOut, s, forest, boosting, logistic, svm, features);
     }
 
     public TrainerSettings withForest(ForestSettings f) {
-        return new TrainerSettings(classifier, balance, folds, holdOut, seed, f, boosting, logistic, svm);
+        return new TrainerSettings(classifier, balance, folds, holdOut, seed, f, boosting, logistic, svm, features);
     }
 
     public TrainerSettings withBoosting(BoostingSettings b) {
-        return new TrainerSettings(classifier, balance, folds, holdOut, seed, forest, b, logistic, svm);
+        return new TrainerSettings(classifier, balance, folds, holdOut, seed, forest, b, logistic, svm, features);
     }
 
     public TrainerSettings withLogistic(LogisticSettings l) {
-        return new TrainerSettings(classifier, balance, folds, holdOut, seed, forest, boosting, l, svm);
+        return new TrainerSettings(classifier, balance, folds, holdOut, seed, forest, boosting, l, svm, features);
     }
 
     public TrainerSettings withSvm(SvmSettings s) {
-        return new TrainerSettings(classifier, balance, folds, holdOut, seed, forest, boosting, logistic, s);
+        return new TrainerSettings(classifier, balance, folds, holdOut, seed, forest, boosting, logistic, s, features);
+    }
+
+    public TrainerSettings withFeatures(FeatureForm f) {
+        return new TrainerSettings(classifier, balance, folds, holdOut, seed, forest, boosting, logistic, svm, f);
     }
 
     /** The chosen classifier's settings by config key. */

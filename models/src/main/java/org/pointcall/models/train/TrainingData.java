@@ -18,12 +18,23 @@ final class TrainingData {
     /** Class index of each output, ascending. */
     final int[] outputClass;
     final long[] rowsPerClass;
+    /** The extractor's features, which a fitted classifier reads. */
     final List<String> featureNames;
+    /** From those to the model's own ({@link #x}, {@link #d}); null when they are the same. */
+    final FeatureMap map;
+    private final List<String> modelNames;
 
     TrainingData(LabelledRows rows) {
-        this.n = rows.rows();
-        this.d = rows.featureCount();
+        this(rows, null);
+    }
+
+    TrainingData(LabelledRows rows, FeatureMap map) {
         this.featureNames = rows.featureNames();
+        this.map = map;
+        LabelledRows fitted = map == null ? rows : map.apply(rows);
+        this.modelNames = fitted.featureNames();
+        this.n = fitted.rows();
+        this.d = fitted.featureCount();
         int[] counts = rows.classCounts();
         this.rowsPerClass = new long[counts.length];
         int[] outputOf = new int[counts.length];
@@ -42,7 +53,7 @@ final class TrainingData {
                 outputClass[outputOf[c]] = c;
             }
         }
-        this.x = rows.flatValues();
+        this.x = fitted.flatValues();
         this.y = new int[n];
         for (int i = 0; i < n; i++) {
             y[i] = outputOf[rows.classOf(i)];
@@ -71,7 +82,8 @@ final class TrainingData {
         return c;
     }
 
+    /** Names of the model's own features (those of {@link #x}). */
     String[] names() {
-        return featureNames.toArray(new String[0]);
+        return modelNames.toArray(new String[0]);
     }
 }

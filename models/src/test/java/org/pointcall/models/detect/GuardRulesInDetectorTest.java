@@ -257,6 +257,32 @@ class GuardRulesInDetectorTest {
     }
 
     @Test
+    void aDoubletWhoseInputCameBeforeTheClassifierRoseIsSeenWholeAndBeginsAtTheInput() {
+        // the classifier wakes up only in the second lobe, at 12 s; the first lobe began at 10.5 s
+        Bump bump = new Bump(ManoeuvreKind.PITCH_DOUBLET, 12, 18, 0.9);
+        Physics doublet = (t, f, s) -> {
+            SyntheticSortie.level(t, f, s);
+            double q = 0;
+            if (t >= 10.5 && t < 11.5) {
+                q = 10;
+            } else if (t >= 11.5 && t < 12.5) {
+                q = -10;
+            } else if (t >= 12.5 && t < 13.3) {
+                q = 3;
+            }
+            s.set(f, "Q", q);
+        };
+        PointEvent kept = run(bump, 25, doublet).onlyFinal();
+        assertEquals(ENDED, kept.type(), kept.evidence()::toString);
+        assertTrue(kept.hasEvidence("passed doublet-q-reversal: pitch rate reversed 2 times"),
+                kept.evidence()::toString);
+        assertTrue(kept.hasEvidence("begin moved to doublet-q-reversal onset at 10.500 s"),
+                kept.evidence()::toString);
+        assertEquals(ns(10.5), kept.beginNs());
+        assertEquals(ns(10.5), kept.keyInstant("input").orElseThrow());
+    }
+
+    @Test
     void aStabilisedPointHoldsAltitudeAndSpeedAndFramesAfterItsEndDoNotCount() {
         Bump bump = new Bump(ManoeuvreKind.STABILISED, 10, 30, 0.9);
         SplittableRandom r = new SplittableRandom(5L);

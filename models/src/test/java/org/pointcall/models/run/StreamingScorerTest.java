@@ -1,5 +1,6 @@
 package org.pointcall.models.run;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -16,6 +17,7 @@ import java.util.Set;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.pointcall.ingest.sim.airframe.AirframeVariation;
 import org.pointcall.ingest.sim.pilot.PilotSettings;
 import org.pointcall.ingest.sim.sensor.SensorSettings;
 import org.pointcall.ingest.sim.truth.SortieTruth;
@@ -146,6 +148,24 @@ class StreamingScorerTest {
                 + Evaluation.of(List.of(b)).events().matches().size(), both.events().matches().size(),
                 "no point of one sortie matches one of the other");
         assertEquals(a.ticks() + b.ticks(), both.rows().total());
+    }
+
+    @Test
+    void variedAirframesFlyOtherSortiesTheSameWayEachTime() throws Exception {
+        TestCard card = CardFiles.parse(CARD, "card.yaml", dict);
+        SortieSets.Flying clean = new SortieSets.Flying(32.0, SensorSettings.CLEAN, PilotSettings.NO_FLAWS);
+        SortieSets.Flying varied = clean.withVariation(new AirframeVariation(0.2));
+        Path a = SortieSets.generate(List.of("veskarn-02"), 1, 10, card, dict, varied, dir.resolve("va"),
+                (d, t) -> { }).get(0);
+        Path b = SortieSets.generate(List.of("veskarn-02"), 1, 10, card, dict, varied, dir.resolve("vb"),
+                (d, t) -> { }).get(0);
+        // the same seeds as the first training sortie, flown on a variant: another flight, the same twice
+        assertArrayEquals(Files.readAllBytes(a.resolve("sortie.csv")), Files.readAllBytes(b.resolve("sortie.csv")));
+        assertFalse(java.util.Arrays.equals(Files.readAllBytes(a.resolve("sortie.csv")),
+                Files.readAllBytes(training.get(0).resolve("sortie.csv"))));
+        SortieTruth t = SortieTruth.read(a.resolve("truth.json"));
+        assertEquals("veskarn-02", t.airframe(), "a variant keeps its type's name");
+        assertEquals(2, t.points().size());
     }
 
     @Test

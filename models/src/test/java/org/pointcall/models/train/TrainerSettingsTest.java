@@ -146,7 +146,7 @@ class TrainerSettingsTest {
         InputRejectedException e = assertThrows(InputRejectedException.class,
                 () -> TrainerSettings.parse("- forest\n", "list.yaml"));
         assertEquals(List.of("list.yaml:1:1: a training config must be a mapping of keys (classifier, seed, folds, "
-                + "balance, hold-out, forest, boosting, logistic, svm), got a list"), lines(e));
+                + "balance, hold-out, forest, boosting, logistic, svm, features), got a list"), lines(e));
         e = assertThrows(InputRejectedException.class,
                 () -> TrainerSettings.parse("classifier: [forest\nfolds: 3\n", "broken.yaml"));
         assertEquals(1, e.problems().size());

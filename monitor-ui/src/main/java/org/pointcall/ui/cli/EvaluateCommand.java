@@ -42,7 +42,7 @@ import picocli.CommandLine.Model.CommandSpec;
 public final class EvaluateCommand implements Callable<Integer> {
 
     @Option(names = "--model", paramLabel = "MODEL",
-            description = "model file (needed unless --analysis; with --verdicts: default the one in the jar)")
+            description = "model file (default: the model shipped in the jar)")
     Path modelFile;
 
     @Option(names = "--analysis",
@@ -97,10 +97,7 @@ public final class EvaluateCommand implements Callable<Integer> {
             w.flush();
             return 0;
         }
-        if (modelFile == null) {
-            throw new PointcallException("give --model MODEL (or --analysis)");
-        }
-        if (!Files.isRegularFile(modelFile)) {
+        if (modelFile != null && !Files.isRegularFile(modelFile)) {
             throw new PointcallException(modelFile + ": no such model file");
         }
         if (data.isEmpty() && recording == null) {
@@ -110,7 +107,8 @@ public final class EvaluateCommand implements Callable<Integer> {
             throw new PointcallException("--recording and --labels go together");
         }
         List<Path> sorties = data.isEmpty() ? List.of() : SortieSets.find(data);
-        LoadedModel<Classifier> model = ModelFiles.load(modelFile, Classifier.class);
+        LoadedModel<Classifier> model = modelFile == null ? ShippedModel.load()
+                : ModelFiles.load(modelFile, Classifier.class);
         List<SortieResult> results = new ArrayList<>();
         if (recording != null) {
             ParameterDictionary dict = dictionaryFile == null ? DemoFiles.dictionary()
@@ -128,6 +126,7 @@ public final class EvaluateCommand implements Callable<Integer> {
         for (String l : e.lines()) {
             w.println(l);
         }
+        w.println("model: " + (modelFile == null ? ShippedModel.NAME : modelFile.toString()));
         w.flush();
         return 0;
     }

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 
+import org.pointcall.ingest.sim.airframe.AirframeVariation;
 import org.pointcall.ingest.sim.pilot.PilotSettings;
 import org.pointcall.ingest.sim.sensor.SensorSettings;
 import org.pointcall.models.run.SortieSets;
@@ -13,6 +14,7 @@ import org.pointcall.shared.card.CardFiles;
 import org.pointcall.shared.card.TestCard;
 import org.pointcall.shared.demo.DemoFiles;
 import org.pointcall.shared.dictionary.ParameterDictionary;
+import org.pointcall.shared.error.PointcallException;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -57,6 +59,12 @@ public final class SortieSetCommand implements Callable<Integer> {
     @Option(names = "--no-flaws", description = "the pilot makes no deliberate bad entries")
     boolean noFlaws;
 
+    @Option(names = "--vary-airframe", paramLabel = "SPREAD", defaultValue = "0",
+            description = "fly each sortie on its own seeded variant of the airframe: mass, size, stability, control"
+                    + " power, stall angle, thrust and surfaces each scaled by a factor within 1 +/- SPREAD"
+                    + " (0 to 0.4; default: ${DEFAULT-VALUE}, the profile as it is)")
+    double spread;
+
     @Spec
     CommandSpec spec;
 
@@ -67,6 +75,11 @@ public final class SortieSetCommand implements Callable<Integer> {
         TestCard card = cardFile == null ? DemoFiles.card() : CardFiles.load(cardFile, dict);
         SortieSets.Flying flying = new SortieSets.Flying(rateHz, clean ? SensorSettings.CLEAN : SensorSettings.DEFAULT,
                 noFlaws ? PilotSettings.NO_FLAWS : PilotSettings.DEFAULT);
+        if (!(spread >= 0 && spread <= AirframeVariation.MAX_SPREAD)) {
+            throw new PointcallException("--vary-airframe must be between 0 and " + AirframeVariation.MAX_SPREAD
+                    + ", got " + spread);
+        }
+        flying = flying.withVariation(new AirframeVariation(spread));
         List<Path> dirs = SortieSets.generate(airframes, count, seed, card, dict, flying, out, (dir, t) -> {
             w.printf(Locale.ROOT, "  %-40s %s, seed %d, %.0f s, %d points%n", dir, t.airframe(), t.seed(),
                     t.durationS(), t.points().size());

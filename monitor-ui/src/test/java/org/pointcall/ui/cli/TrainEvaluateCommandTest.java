@@ -1,6 +1,7 @@
 package org.pointcall.ui.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.charset.StandardCharsets;
@@ -121,6 +122,40 @@ class TrainEvaluateCommandTest {
         assertEquals("2", f.get("sorties"));
         assertEquals("4", f.get("events.true"), "two points in each of two sorties");
         assertEquals(r.number("ticks"), r.number("rows"));
+    }
+
+    @Test
+    void compareWritesEveryClassifierWithEveryBalanceMethod() throws Exception {
+        Path config = dir.resolve("compare.yaml");
+        Files.writeString(config, CONFIG + String.join("\n", "boosting:", "  trees: 5", "logistic:",
+                "  iterations: 50", "svm:", "  row-cap: 200", "  calibration-rows: 100", ""), StandardCharsets.UTF_8);
+        Path table = dir.resolve("compare/table.md");
+        Files.createDirectories(table.getParent());
+        CommandRun r = CommandRun.of("train", "--compare", "--thin", "10", "--cost-calls", "0", "--data",
+                dir.resolve("set").toString(), "--config", config.toString(), "--out", table.toString());
+        assertEquals(0, r.exitCode(), r.err());
+        List<String> lines = Files.readAllLines(table);
+        assertTrue(lines.get(0).startsWith("# Classifiers and balance methods"), lines.toString());
+        for (String classifier : List.of("forest", "boosting", "logistic", "svm")) {
+            List<String> rows = lines.stream().filter(l -> l.startsWith("| " + classifier + " | ")).toList();
+            assertEquals(4, rows.size(), classifier + ": one row per balance method in " + lines);
+            assertEquals(!classifier.equals("forest"), rows.stream().anyMatch(l -> l.contains("n/a: ")),
+                    "only the forest takes class weights: " + rows);
+        }
+        assertTrue(r.out().contains("wrote: " + table), r.out());
+        assertFalse(Files.exists(dir.resolve("compare/ranking.csv")), "a comparison writes no model");
+    }
+
+    @Test
+    void evaluateWithoutAModelUsesTheShippedOne() {
+        assertEquals(0, train.exitCode(), train.err());
+        CommandRun r = CommandRun.of("evaluate", "--data", dir.resolve("set/sparrel-a1-01").toString());
+        assertEquals(0, r.exitCode(), r.err());
+        Map<String, String> f = r.figures();
+        assertEquals("the shipped default model", f.get("model"));
+        assertEquals("1", f.get("sorties"));
+        assertEquals("2", f.get("events.true"));
+        assertTrue(f.containsKey("events.f1"), r.out());
     }
 
     @Test
