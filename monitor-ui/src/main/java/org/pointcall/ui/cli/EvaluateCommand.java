@@ -10,7 +10,6 @@ import java.util.concurrent.Callable;
 import org.pointcall.models.detect.DetectorSettings;
 import org.pointcall.models.label.LabelFiles;
 import org.pointcall.models.modelfile.LoadedModel;
-import org.pointcall.models.modelfile.ModelFiles;
 import org.pointcall.models.run.AnalysisAccuracy;
 import org.pointcall.models.run.Evaluation;
 import org.pointcall.models.run.SortieResult;
@@ -107,8 +106,7 @@ public final class EvaluateCommand implements Callable<Integer> {
             throw new PointcallException("--recording and --labels go together");
         }
         List<Path> sorties = data.isEmpty() ? List.of() : SortieSets.find(data);
-        LoadedModel<Classifier> model = modelFile == null ? ShippedModel.load()
-                : ModelFiles.load(modelFile, Classifier.class);
+        LoadedModel<Classifier> model = DetectorModel.load(modelFile);
         List<SortieResult> results = new ArrayList<>();
         if (recording != null) {
             ParameterDictionary dict = dictionaryFile == null ? DemoFiles.dictionary()
