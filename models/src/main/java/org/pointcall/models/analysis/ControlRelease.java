@@ -33,4 +33,39 @@ public final class ControlRelease {
         }
         return Double.NaN;
     }
+    /**
+     * The release of an input made at the start of a long free response (a phugoid): the first instant after the
+     * largest excursion found in the first {@code searchS} seconds that the control is back within a quarter of that
+     * excursion of where it rests. "Where it rests" is the median over the whole stretch, so a recovery input at the
+     * end (which {@link #lastMove} would take for the release) does not move it. NaN when the control never moved
+     * beyond the floor within the search span.
+     */
+    public static double firstSettle(Series control, double from, double to, double searchS, double floor) {
+        Series s = control.between(from, to);
+        if (s.size() < 4) {
+            return Double.NaN;
+        }
+        double[] all = s.values();
+        java.util.Arrays.sort(all);
+        double rest = all[all.length / 2];
+        int peak = -1;
+        double most = 0;
+        for (int i = 0; i < s.size() && s.t(i) <= s.firstT() + searchS; i++) {
+            double d = Math.abs(s.v(i) - rest);
+            if (d > most) {
+                most = d;
+                peak = i;
+            }
+        }
+        if (peak < 0 || most <= floor) {
+            return Double.NaN;
+        }
+        double back = Math.max(floor, 0.25 * most);
+        for (int i = peak + 1; i < s.size(); i++) {
+            if (Math.abs(s.v(i) - rest) <= back) {
+                return s.t(i);
+            }
+        }
+        return Double.NaN;
+    }
 }

@@ -21,8 +21,8 @@ import org.pointcall.shared.units.Units;
  * Phugoid: the long-period mode from the free airspeed response after the release.
  *
  * <ul>
- * <li>{@code release}: the detector's hint, else the last instant the elevator stood away from where it then
- *     stayed;</li>
+ * <li>{@code release}: the detector's hint, else the first instant after the input (the largest elevator
+ *     excursion in the first 30 s) that the elevator is back near where it rests over the point;</li>
  * <li>{@code period}, {@code damping}: logarithmic decrement on the airspeed peaks (true airspeed, calibrated when
  *     there is none) from 5 s after the release to the end: the airspeed smoothed by a local least-squares line
  *     (2 s each side), its alternating peaks and troughs found with hysteresis, the half-cycle ratio the
@@ -35,6 +35,8 @@ import org.pointcall.shared.units.Units;
  * </ul>
  */
 public final class PhugoidAnalyser implements ManoeuvreAnalyser {
+    /** The phugoid input and its release lie within this much of the begin. */
+    private static final double RELEASE_SEARCH_S = 30.0;
     static final double SKIP_AFTER_RELEASE_S = 5.0;
     private static final double ELEVATOR_FLOOR_RAD = Math.toRadians(0.2);
 
@@ -56,8 +58,9 @@ public final class PhugoidAnalyser implements ManoeuvreAnalyser {
         Long h = hintedInstantsNs.get("release");
         double release = h == null ? Double.NaN : (h - beginNs) * 1e-9;
         if (Double.isNaN(release) && history.has("Elevator")) {
-            release = ControlRelease.lastMove(Series.cleanOf(history, "Elevator", beginNs), 0.0, endS, 10.0,
-                    ELEVATOR_FLOOR_RAD);
+            // the input is at the start; the pilot's recovery at the end must not be taken for the release
+            release = ControlRelease.firstSettle(Series.cleanOf(history, "Elevator", beginNs), 0.0, endS,
+                    Math.min(RELEASE_SEARCH_S, endS), ELEVATOR_FLOOR_RAD);
         }
         if (Double.isNaN(release)) {
             release = 0.0;
