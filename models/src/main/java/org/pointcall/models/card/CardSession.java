@@ -104,6 +104,14 @@ public final class CardSession {
     private long ticks;
     private long firstFrameNs = Long.MIN_VALUE;
     private long lastFrameNs = Long.MIN_VALUE;
+    /**
+     * An ended point is judged this much data time after its end, so that analysers see how it came out (a loop's
+     * exit to level flight can lie just after the detector's end); a new point's begin or the stream's end judges it
+     * at once.
+     */
+    static final long POST_ROLL_NS = 3_000_000_000L;
+    /** An ENDED event waiting for its post-roll, or null. */
+    private PointEvent heldEnd;
     private long currentFrameNs;
     private boolean pending;
     private long pendingNs;
@@ -214,6 +222,9 @@ public final class CardSession {
             pending = false;
             tick(pendingNs);
         }
+        if (heldEnd != null && t >= heldEnd.endNs() + POST_ROLL_NS) {
+            releaseHeldEnd();
+        }
         if (lastTrimNs == Long.MIN_VALUE || t - lastTrimNs > 5_000_000_000L) {
             lastTrimNs = t;
             long keep = (active == null ? t : Math.min(t, active.beginNs)) - prerollNs;
@@ -233,6 +244,7 @@ public final class CardSession {
         applyCommands(t);
         if (frames > 0) {
             finishing = true;
+            releaseHeldEnd();
             detector.finish(lastFrameNs);
             finishing = false;
         }
@@ -269,9 +281,31 @@ public final class CardSession {
 
     private void onPointEvent(PointEvent e) {
         switch (e.type()) {
-            case BEGUN -> begin(e);
+            case BEGUN -> {
+                releaseHeldEnd();
+                begin(e);
+            }
             case REFINED -> refine(e);
-            case ENDED, DISCARDED -> close(e);
+            case ENDED -> {
+                releaseHeldEnd();
+                if (finishing) {
+                    close(e);
+                } else {
+                    heldEnd = e;
+                }
+            }
+            case DISCARDED -> {
+                releaseHeldEnd();
+                close(e);
+            }
+        }
+    }
+
+    private void releaseHeldEnd() {
+        if (heldEnd != null) {
+            PointEvent e = heldEnd;
+            heldEnd = null;
+            close(e);
         }
     }
 

@@ -23,11 +23,17 @@ import org.pointcall.shared.kind.ManoeuvreKind;
  *     {@code apex-hp} and {@code apex-kcas} there;</li>
  * <li>{@code exit}: after the apex, upright, the first instant the flight path angle ({@code asin} of the
  *     smoothed climb rate of pressure altitude over true airspeed) is back within 0.5 deg of level after a
- *     descent; exit altitude and heading against the entry's, and the duration from the pull.</li>
+ *     descent, looked for up to 5 s past the detected end; exit altitude and heading against the entry's, and the
+ *     duration from the pull.</li>
  * </ul>
  */
 public final class LoopAnalyser implements ManoeuvreAnalyser {
     private static final double LEVEL_RAD = Math.toRadians(0.5);
+    /**
+     * The detector may end a loop a little before the flight path is back to level; the exit is looked for this far
+     * past the detected end, where the history reaches (the card session keeps a post-roll for it).
+     */
+    static final double EXIT_GRACE_S = 5.0;
 
     @Override
     public ManoeuvreKind kind() {
@@ -108,7 +114,8 @@ public final class LoopAnalyser implements ManoeuvreAnalyser {
         Series tas = Series.cleanOf(history, "KTAS", beginNs);
         double exit = Double.NaN;
         boolean down = false;
-        for (int i = climb.firstAtOrAfter(apex); i < climb.size() && climb.t(i) <= endS; i++) {
+        double exitSearchS = endS + EXIT_GRACE_S;
+        for (int i = climb.firstAtOrAfter(apex); i < climb.size() && climb.t(i) <= exitSearchS; i++) {
             double t = climb.t(i);
             double v = tas.at(t);
             double gamma = v > 1 ? Math.asin(Math.max(-1, Math.min(1, climb.v(i) / v))) : Double.NaN;
