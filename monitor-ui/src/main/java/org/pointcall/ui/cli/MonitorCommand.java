@@ -44,13 +44,12 @@ import picocli.CommandLine.Model.CommandSpec;
 @Command(name = "monitor",
         header = "Follow a test card live over UDP; --headless prints one line per event.",
         mixinStandardHelpOptions = true,
-        description = {
-            "Listens for pointcall wire-format telemetry, runs each stream through the live pipeline and the",
-            "card session (detector, card matching, live bands, safety limits, analysis, verdicts) and prints",
-            "one line per event: point begun, band status changed, point ended with its verdict, unplanned",
-            "manoeuvre, limit alarm. With --out, writes points.json and points.csv when it stops (after",
-            "--until-idle seconds without a datagram, or on Ctrl-C). The tool proposes; the team decides."
-        })
+        description = "Listens for pointcall wire-format telemetry, runs each stream through the live pipeline "
+                + "and the card session (detector, card matching, live bands, safety limits, analysis, verdicts) "
+                + "and prints one line per event: point begun, band status changed, point ended with its verdict, "
+                + "unplanned manoeuvre, limit alarm. With --out, writes points.json and points.csv when it stops "
+                + "(after --until-idle seconds without a datagram, or on Ctrl-C). The tool proposes; the team "
+                + "decides.%n")
 public final class MonitorCommand implements Callable<Integer> {
 
     @Option(names = "--headless", description = "no console: events as lines on standard output")
