@@ -40,7 +40,13 @@ final class VerdictOverlay {
         top.setAlignment(Pos.CENTER_LEFT);
         Label how = new Label("K or Acknowledge to clear   \u2022   G / R to call it yourself, with a note");
         how.getStyleClass().add("dim");
-        box = new VBox(10, top, reasons, how);
+        // the same caution as the README: the verdict is a proposal, never the call itself
+        Label caution = new Label("A proposal to the test team: the call is the engineer's; the test conductor, "
+                + "the test plan's limits and the flight manual come first.");
+        caution.getStyleClass().add("dim");
+        caution.setId("verdict-caution");
+        caution.setWrapText(true);
+        box = new VBox(10, top, reasons, how, caution);
         box.getStyleClass().add("verdict-box");
         box.setMaxSize(720, javafx.scene.layout.Region.USE_PREF_SIZE);
         box.setId("verdict-box");
