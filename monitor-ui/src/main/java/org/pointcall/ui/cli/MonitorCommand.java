@@ -4,6 +4,7 @@ import java.io.PrintWriter;
 import java.net.InetSocketAddress;
 import java.net.URI;
 import java.net.URISyntaxException;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -14,6 +15,8 @@ import java.util.concurrent.TimeUnit;
 
 import org.pointcall.ingest.pipeline.PacketPipeline;
 import org.pointcall.ingest.udp.UdpSource;
+import org.pointcall.replay.record.Recorder;
+import org.pointcall.replay.record.RecorderPolicy;
 import org.pointcall.ingest.udp.UdpSourceConfig;
 import org.pointcall.ingest.wire.DecoderOptions;
 import org.pointcall.ingest.wire.DictionaryRegistry;
@@ -75,6 +78,14 @@ public final class MonitorCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "DIR", description = "folder for points.json and points.csv at the end")
     Path out;
 
+    @Option(names = "--record", paramLabel = "DIR", defaultValue = "sorties",
+            description = "folder for the sortie archive of this session: every datagram as received and the "
+                    + "session's events (default: ${DEFAULT-VALUE})")
+    Path recordDir;
+
+    @Option(names = "--no-record", description = "do not record the session")
+    boolean noRecord;
+
     @Spec
     CommandSpec spec;
 
@@ -97,6 +108,8 @@ public final class MonitorCommand implements Callable<Integer> {
         LoadedModel<Classifier> model = DetectorModel.load(modelFile);
         FaultLog faults = new FaultLog(line -> say(w, "fault: " + line), FaultLog.DEFAULT_MAX_LINES,
                 FaultLog.DEFAULT_WINDOW_NS);
+        Recorder recorder = noRecord ? null : Recorder.startIn(recordDir, RecorderPolicy.DEFAULT, System::nanoTime,
+                a -> say(w, "recorder: " + a));
         StreamFrameSink sink = new StreamFrameSink() {
             @Override
             public void onFrame(int streamId, Frame frame, long receiveTimeNs) {
@@ -115,7 +128,13 @@ public final class MonitorCommand implements Callable<Integer> {
                 try {
                     TestCard card = CardFiles.load(cardFile, dictionary);
                     CardSession s = new CardSession(SessionSetup.of(dictionary, card, model.model(),
-                            model.metadata().description(), CardAnalysers.standard()), e -> say(w, line(e)));
+                            model.metadata().description(), CardAnalysers.standard()), e -> {
+                                say(w, line(e));
+                                if (recorder != null) {
+                                    recorder.appendRecord("session.event", e.timeNs(),
+                                            PointsFiles.eventToJson(e).getBytes(StandardCharsets.UTF_8));
+                                }
+                            });
                     sessions.put(streamId, s);
                     say(w, "stream " + streamId + ": dictionary '" + dictionary.name() + "', card " + card.sortie()
                             + " (" + card.points().size() + " points)");
@@ -128,11 +147,15 @@ public final class MonitorCommand implements Callable<Integer> {
                 sink, DecoderOptions.DEFAULT, PacketPipeline.DEFAULT_QUEUE_PACKETS, faults, System::nanoTime);
         UdpSource udp;
         try {
-            udp = new UdpSource(new UdpSourceConfig(bind, UdpSourceConfig.DEFAULT_RECEIVE_BUFFER_BYTES, java.util.Set.of(), true), pipeline, faults, System::nanoTime);
+            udp = new UdpSource(new UdpSourceConfig(bind, UdpSourceConfig.DEFAULT_RECEIVE_BUFFER_BYTES, java.util.Set.of(), true),
+                    recorder == null ? pipeline : recorder.tee(pipeline), faults, System::nanoTime);
         } catch (RuntimeException e) {
             throw new PointcallException("cannot listen on " + listen + ": " + e.getMessage(), e);
         }
-        Thread stopper = new Thread(() -> stop(udp, pipeline, w), "monitor-stop");
+        if (recorder != null) {
+            say(w, "recording: " + recorder.file());
+        }
+        Thread stopper = new Thread(() -> stop(udp, pipeline, recorder, w), "monitor-stop");
         Runtime.getRuntime().addShutdownHook(stopper);
         pipeline.start();
         udp.start();
@@ -152,14 +175,14 @@ public final class MonitorCommand implements Callable<Integer> {
             }
         }
         Runtime.getRuntime().removeShutdownHook(stopper);
-        stop(udp, pipeline, w);
+        stop(udp, pipeline, recorder, w);
         return 0;
     }
 
     private boolean stopped;
 
     /** Stops the receiver, drains the pipeline, finishes every session and writes the points files. */
-    private synchronized void stop(UdpSource udp, PacketPipeline pipeline, PrintWriter w) {
+    private synchronized void stop(UdpSource udp, PacketPipeline pipeline, Recorder recorder, PrintWriter w) {
         if (stopped) {
             return;
         }
@@ -171,6 +194,10 @@ public final class MonitorCommand implements Callable<Integer> {
             CardSession s = e.getValue();
             s.finish();
             files.add(s.pointsFile("udp stream " + e.getKey() + " on " + listen));
+        }
+        if (recorder != null) {
+            recorder.close();
+            say(w, "recorded: " + recorder.file());
         }
         say(w, "stopped: " + udp.datagrams() + " datagrams, " + sessions.values().stream()
                 .mapToLong(CardSession::frames).sum() + " frames");

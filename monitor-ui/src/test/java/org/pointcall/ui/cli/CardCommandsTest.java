@@ -162,7 +162,8 @@ class CardCommandsTest {
         Path out = dir.resolve("live");
         AtomicReference<CommandRun> mon = new AtomicReference<>();
         Thread t = new Thread(() -> mon.set(CommandRun.of("monitor", "--headless", "--listen",
-                "udp://127.0.0.1:" + port, "--card", cardB.toString(), "--until-idle", "2", "--out", out.toString())));
+                "udp://127.0.0.1:" + port, "--card", cardB.toString(), "--until-idle", "2", "--out", out.toString(),
+                "--record", dir.resolve("archive").toString())));
         t.start();
         long deadline = System.nanoTime() + 30_000_000_000L;
         while (System.nanoTime() < deadline && isFree(port)) {
@@ -185,6 +186,27 @@ class CardCommandsTest {
         assertEquals(file.keySet(), live.keySet());
         for (String id : file.keySet()) {
             assertEquals(file.get(id).verdict(), live.get(id).verdict(), id + " live and from the file");
+        }
+        // live monitoring records by default: every datagram and the session's events are in the archive
+        List<Path> archives;
+        try (var files = Files.list(dir.resolve("archive"))) {
+            archives = files.filter(f -> f.toString().endsWith(".pcsa")).toList();
+        }
+        assertEquals(1, archives.size(), archives.toString());
+        try (org.pointcall.replay.archive.ArchiveReader ar =
+                     org.pointcall.replay.archive.ArchiveReader.open(archives.get(0))) {
+            long[] packets = new long[1];
+            List<String> events = new java.util.ArrayList<>();
+            ar.read(r -> {
+                if (r.isPacket()) {
+                    packets[0]++;
+                } else if ("session.event".equals(r.type())) {
+                    events.add(new String(r.bodyBytes(), StandardCharsets.UTF_8));
+                }
+                return true;
+            });
+            assertTrue(o.contains("stopped: " + packets[0] + " datagrams"), "every datagram recorded: " + packets[0]);
+            assertTrue(events.stream().anyMatch(e -> e.contains("SL-1")), "session events recorded");
         }
     }
 
