@@ -1,14 +1,12 @@
 package org.pointcall.ingest.pipeline;
 
-import java.net.Inet4Address;
-import java.net.InetAddress;
 import java.net.InetSocketAddress;
-import java.net.UnknownHostException;
 import java.nio.ByteBuffer;
 import java.util.concurrent.locks.LockSupport;
 import java.util.function.LongSupplier;
 
 import org.pointcall.ingest.udp.DatagramHandler;
+import org.pointcall.ingest.udp.SenderTags;
 import org.pointcall.ingest.wire.DecoderOptions;
 import org.pointcall.ingest.wire.DictionaryDecoder;
 import org.pointcall.ingest.wire.DictionaryRegistry;
@@ -65,7 +63,7 @@ public final class PacketPipeline implements DatagramHandler, AutoCloseable {
     /** Receiver side: copies the datagram into the queue, or counts it as dropped. Never blocks. */
     @Override
     public void onDatagram(ByteBuffer datagram, InetSocketAddress sender, long receiveTimeNs) {
-        if (!queue.offer(datagram, receiveTimeNs, SenderTag.pack(sender))) {
+        if (!queue.offer(datagram, receiveTimeNs, SenderTags.pack(sender))) {
             if (log.admit(receiveTimeNs)) {
                 log.emit("pipeline queue full (" + queue.capacity() + " packets): datagram from " + sender
                         + " dropped; " + (queue.droppedFull() + queue.droppedOversize())
@@ -135,19 +133,9 @@ public final class PacketPipeline implements DatagramHandler, AutoCloseable {
         return true;
     }
 
-    /** The sender of the packet being decoded, packed in a long so the queue carries no objects. */
+    /** The sender of the packet being decoded, as a {@link SenderTags} long. */
     static final class SenderTag {
         private long tag;
-
-        static long pack(InetSocketAddress a) {
-            InetAddress ip = a.getAddress();
-            long ip4 = 0;
-            if (ip instanceof Inet4Address) {
-                byte[] b = ip.getAddress();
-                ip4 = ((b[0] & 0xffL) << 24) | ((b[1] & 0xffL) << 16) | ((b[2] & 0xffL) << 8) | (b[3] & 0xffL);
-            }
-            return (ip4 << 16) | (a.getPort() & 0xffff);
-        }
 
         void set(long t) {
             tag = t;
@@ -156,13 +144,7 @@ public final class PacketPipeline implements DatagramHandler, AutoCloseable {
         /** Only called when a log line is written. */
         @Override
         public String toString() {
-            long ip4 = tag >>> 16;
-            byte[] b = {(byte) (ip4 >>> 24), (byte) (ip4 >>> 16), (byte) (ip4 >>> 8), (byte) ip4};
-            try {
-                return InetAddress.getByAddress(b).getHostAddress() + ":" + (tag & 0xffff);
-            } catch (UnknownHostException e) {
-                return "sender " + Long.toHexString(tag);
-            }
+            return SenderTags.format(tag);
         }
     }
 }

@@ -18,6 +18,7 @@ import java.util.function.LongSupplier;
 
 import org.pointcall.ingest.pipeline.PacketQueue;
 import org.pointcall.ingest.udp.DatagramHandler;
+import org.pointcall.ingest.udp.SenderTags;
 import org.pointcall.replay.archive.ArchiveFormat;
 import org.pointcall.replay.archive.ArchiveWriter;
 import org.pointcall.replay.archive.ChunkBuilder;

@@ -16,6 +16,7 @@ import java.util.concurrent.atomic.AtomicLong;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.pointcall.ingest.udp.SenderTags;
 import org.pointcall.replay.archive.ArchiveReader;
 import org.pointcall.replay.archive.TypedRecord;
 

@@ -1,4 +1,4 @@
-package org.pointcall.replay.record;
+package org.pointcall.ingest.udp;
 
 import java.net.Inet4Address;
 import java.net.InetAddress;
@@ -6,8 +6,8 @@ import java.net.InetSocketAddress;
 import java.net.UnknownHostException;
 
 /**
- * A packet's sender packed in a long as stored in a packet record: IPv4 address in bits 16 to 47, port in bits 0
- * to 15 (0 for another address family or no sender).
+ * A packet's sender packed in a long, so queues carry no objects and archive packet records can store it: IPv4
+ * address in bits 16 to 47, port in bits 0 to 15 (0 for no sender; the address part is 0 for another family).
  */
 public final class SenderTags {
     private SenderTags() {
