@@ -25,17 +25,18 @@ class TraceHistoryTest {
             h.add(t[i], v[i]);
         }
         int columns = 400;
-        double[] x = new double[2 * columns];
-        double[] y = new double[2 * columns];
+        double[] x = new double[2 * columns + 2];
+        double[] y = new double[2 * columns + 2];
         int m = h.envelope(0, 20, columns, x, y);
         assertTrue(m <= 2 * columns && m >= columns, "points " + m);
+        double w = 20.0 / columns; // bins anchored at time zero, as the envelope defines them
         // brute force: per column min and max of the raw samples
         double[] lo = new double[columns];
         double[] hi = new double[columns];
         java.util.Arrays.fill(lo, Double.POSITIVE_INFINITY);
         java.util.Arrays.fill(hi, Double.NEGATIVE_INFINITY);
         for (int i = 0; i < n; i++) {
-            int c = Math.min(columns - 1, (int) (t[i] / 20 * columns));
+            int c = (int) Math.floor(t[i] / w);
             lo[c] = Math.min(lo[c], v[i]);
             hi[c] = Math.max(hi[c], v[i]);
         }
@@ -47,7 +48,7 @@ class TraceHistoryTest {
             if (k > 0) {
                 assertTrue(x[k] > x[k - 1], "points stay in time order");
             }
-            int c = Math.min(columns - 1, (int) (x[k] / 20 * columns));
+            int c = (int) Math.floor(x[k] / w);
             gotLo[c] = Math.min(gotLo[c], y[k]);
             gotHi[c] = Math.max(gotHi[c], y[k]);
         }
@@ -55,6 +56,57 @@ class TraceHistoryTest {
             assertEquals(lo[c], gotLo[c], 0.0, "column " + c + " low");
             assertEquals(hi[c], gotHi[c], 0.0, "column " + c + " high");
         }
+    }
+
+    /**
+     * Drawn redraw after redraw while samples arrive and the span scrolls, the kept bins must give exactly what a
+     * fresh history holding the same samples gives in one go; after a clear (a replay seek back) the old bins are
+     * gone.
+     */
+    @Test
+    void envelopeKeptAcrossRedrawsEqualsOneMadeAfresh() {
+        TraceHistory live = new TraceHistory(1 << 15);
+        SplittableRandom r = new SplittableRandom(11);
+        int columns = 300;
+        double span = 20;
+        double[] x = new double[2 * columns + 2];
+        double[] y = new double[2 * columns + 2];
+        double[] fx = new double[2 * columns + 2];
+        double[] fy = new double[2 * columns + 2];
+        java.util.List<double[]> all = new java.util.ArrayList<>();
+        int compared = 0;
+        for (int frame = 0; frame < 200; frame++) {
+            for (int k = 0; k < 40; k++) { // 1,000 samples/s, a redraw every 40 ms
+                int i = frame * 40 + k;
+                double ti = 100 + i / 1000.0;
+                double vi = Math.sin(ti * 3) + r.nextGaussian() * 0.2;
+                live.add(ti, vi);
+                all.add(new double[] {ti, vi});
+            }
+            double now = all.get(all.size() - 1)[0];
+            int m = live.envelope(now - span, now, columns, x, y);
+            if (frame % 20 == 19) {
+                TraceHistory fresh = new TraceHistory(1 << 15);
+                for (double[] s : all) {
+                    fresh.add(s[0], s[1]);
+                }
+                int fm = fresh.envelope(now - span, now, columns, fx, fy);
+                assertEquals(fm, m, "points at frame " + frame);
+                for (int k = 0; k < m; k++) {
+                    assertEquals(fx[k], x[k], 0.0, "time of point " + k + " at frame " + frame);
+                    assertEquals(fy[k], y[k], 0.0, "value of point " + k + " at frame " + frame);
+                }
+                compared++;
+            }
+        }
+        assertEquals(10, compared);
+        live.clear();
+        live.add(50.0, 1.0);
+        live.add(50.5, 2.0);
+        int m = live.envelope(40, 60, columns, x, y);
+        assertEquals(2, m, "only the samples after the clear");
+        assertEquals(50.0, x[0]);
+        assertEquals(2.0, y[1]);
     }
 
     @Test
