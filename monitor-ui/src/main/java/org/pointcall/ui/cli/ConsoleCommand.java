@@ -26,7 +26,9 @@ import org.pointcall.ui.console.ConsoleApp;
 import org.pointcall.ui.console.ConsoleSetup;
 import org.pointcall.ui.console.TraceDrawing;
 import org.pointcall.ui.demo.LiveConsole;
-import org.pointcall.ui.demo.ReplayTransport;
+import org.pointcall.ui.demo.ReplayDeck;
+import org.pointcall.ui.desk.DeskLink;
+import org.pointcall.ui.trace.TraceFeed;
 import org.pointcall.ui.demo.SessionDesk;
 import org.pointcall.ui.desk.PointSpan;
 import org.pointcall.ui.settings.ConsoleSettings;
@@ -105,40 +107,25 @@ public final class ConsoleCommand implements Callable<Integer> {
         SessionDesk desk = new SessionDesk(card, dict);
         List<String> faults = java.util.Collections.synchronizedList(new ArrayList<>());
         int port = source.listen == null ? 0 : MonitorCommand.address(source.listen).getPort();
-        try (LiveConsole live = new LiveConsole(port, dict, settings, desk,
-                (d, listener) -> new CardSession(SessionSetup.of(d, card, model.model(), model.metadata().description(),
-                        CardAnalysers.standard()), listener), null, faults::add, source.replay == null)) {
-            live.start();
-            Thread player = null;
-            if (reader != null) {
-                ReplayControl control = new ReplayControl(ReplayControl.parseSpeed(Double.toString(speed)), paused);
-                long first = reader.firstTimeNs();
-                double lengthS = (reader.lastTimeNs() - first) / 1e9;
-                // Archive time is arrival time; a point's begin is data time. The two are mapped by what has been
-                // played so far (a sortie recorded at 4x has four seconds of data per archive second).
-                desk.transport(new ReplayTransport(control, first, lengthS, id -> {
-                    long d0 = live.clock().firstNs();
-                    long dNow = live.clock().timeNs();
-                    long aNow = control.positionNs();
-                    if (d0 == Long.MIN_VALUE || aNow == Long.MIN_VALUE) {
-                        return null;
-                    }
-                    double ratio = dNow > d0 ? (double) (aNow - first) / (dNow - d0) : 1.0;
-                    for (PointSpan s : desk.spans()) {
-                        if (s.pointId().equals(id)) {
-                            return (first + (s.beginS() * 1e9 - d0) * ratio) / 1e9;
-                        }
-                    }
-                    return null;
-                }));
-                ArchiveReader r = reader;
-                player = new Thread(() -> new Replayer(new ArchiveSource(r),
-                        ReplayTargets.pipeline(live.rig().pipeline()), ReplayClock.SYSTEM, control).run(), "replay");
-                player.setDaemon(true);
-                player.start();
+        LiveConsole.SessionFactory sessions = (d, listener) -> new CardSession(SessionSetup.of(d, card, model.model(),
+                model.metadata().description(), CardAnalysers.standard()), listener);
+        try (AutoCloseable running = reader == null
+                ? new LiveConsole(port, dict, settings, desk, sessions, null, faults::add, true)
+                : new ReplayDeck(reader, card, dict, settings, sessions, faults::add)) {
+            DeskLink link;
+            TraceFeed traces;
+            if (running instanceof LiveConsole live) {
+                live.start();
+                link = live.link();
+                traces = live.traces();
+            } else {
+                ReplayDeck deck = (ReplayDeck) running;
+                deck.start(ReplayControl.parseSpeed(Double.toString(speed)), paused);
+                link = deck.link();
+                traces = deck.traces();
             }
             ConsoleSetup setup = new ConsoleSetup("pointcall console \u2014 " + card.sortie()
-                    + (reader == null ? " (live)" : " (replay)"), live.link(), live.traces(), settings, settingsPath,
+                    + (reader == null ? " (live)" : " (replay)"), link, traces, settings, settingsPath,
                     reader != null, ConsoleSetup.DEFAULT_REDRAW_HZ, TraceDrawing.ENVELOPE);
             ConsoleApp.run(setup, screenshot == null ? null : new ConsoleApp.Screenshot(screenshot, afterS));
             if (screenshot != null) {

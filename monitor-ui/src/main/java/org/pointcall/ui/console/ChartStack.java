@@ -79,8 +79,14 @@ final class ChartStack {
         return total;
     }
 
+    /** Data time going back by more than this means the stream started again (a replay jumped back). */
+    static final double RESTART_S = 1.0;
+
     private void onSample(long timeNs, double[] values) {
         double t = timeNs / 1e9;
+        if (t < nowS - RESTART_S) {
+            clear(); // live data never goes back this far; a replay's jump back does: the traces start again
+        }
         for (int i = 0; i < channelOfLane.length; i++) {
             int ch = channelOfLane[i];
             if (ch >= 0) {

@@ -85,7 +85,8 @@ final class TransportBar {
     }
 
     void seekBy(double seconds) {
-        double now = state == null ? 0 : state.positionS();
+        // keys pressed while a jump is caught up add to the jump, not to where the replay is on the way
+        double now = state == null ? 0 : Double.isNaN(state.catchUpToS()) ? state.positionS() : state.catchUpToS();
         double len = state == null ? 0 : state.lengthS();
         send.accept(new DeskCommand.Seek(Math.max(0, Math.min(len, now + seconds))));
     }
@@ -99,8 +100,16 @@ final class TransportBar {
         speed.setText(String.format(Locale.ROOT, "x%s", LaneChart.format(t.speed()).replaceAll("\\.?0+$", "")));
         long p = (long) t.positionS();
         long l = (long) t.lengthS();
+        String status;
+        if (!Double.isNaN(t.catchUpToS())) {
+            long c = (long) t.catchUpToS();
+            status = String.format(Locale.ROOT, "catching up to %02d:%02d", c / 60, c % 60);
+        } else {
+            status = t.playing() ? "playing" : t.positionS() >= t.lengthS() - 0.05 && t.lengthS() > 0 ? "ENDED"
+                    : "PAUSED";
+        }
         position.setText(String.format(Locale.ROOT, "%02d:%02d / %02d:%02d  %s", p / 60, p % 60, l / 60, l % 60,
-                t.playing() ? "playing" : t.positionS() >= t.lengthS() - 0.05 && t.lengthS() > 0 ? "ENDED" : "PAUSED"));
+                status));
         if (!slider.isValueChanging()) {
             updating = true;
             slider.setMax(Math.max(1, t.lengthS()));

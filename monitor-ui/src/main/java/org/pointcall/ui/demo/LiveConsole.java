@@ -30,7 +30,7 @@ public final class LiveConsole implements AutoCloseable {
         CardSession create(ParameterDictionary dictionary, SessionListener listener);
     }
 
-    private final DeskLink link = new DeskLink();
+    private final DeskLink link;
     private final TraceTap tap;
     private final DataClock clock = new DataClock();
     private final LiveRig rig;
@@ -53,17 +53,18 @@ public final class LiveConsole implements AutoCloseable {
     public LiveConsole(int port, ParameterDictionary dictionary, ConsoleSettings settings, SessionDesk desk,
                        SessionFactory sessions, Function<DatagramHandler, DatagramHandler> tee,
                        Consumer<String> faults, boolean live) {
+        this(port, new DeskLink(), tapFor(dictionary, settings, faults), desk, sessions, tee, faults, live);
+    }
+
+    /**
+     * On a link and chart tap of the caller's (a replay keeps them over a jump back, so the window stays as it
+     * is): the tap must not be written by another live side at the same time.
+     */
+    public LiveConsole(int port, DeskLink link, TraceTap tap, SessionDesk desk, SessionFactory sessions,
+                       Function<DatagramHandler, DatagramHandler> tee, Consumer<String> faults, boolean live) {
         this.desk = desk;
-        List<String> charted = new ArrayList<>();
-        for (String p : settings.chartedParameters()) {
-            if (dictionary.indexOf(p) >= 0) {
-                charted.add(p);
-            } else {
-                faults.accept("chart parameter '" + p + "' is not in the dictionary; its lane stays empty");
-            }
-        }
-        tap = new TraceTap(dictionary, charted.isEmpty() ? List.of(dictionary.parameters().get(0).name()) : charted,
-                RING_SAMPLES);
+        this.link = link;
+        this.tap = tap;
         rig = new LiveRig(port, (id, d) -> {
             CardSession old = session;
             if (old != null) {
@@ -80,6 +81,20 @@ public final class LiveConsole implements AutoCloseable {
             };
         }, tee, faults, live);
         publisher = new DeskPublisher(link, desk, new HealthReader(rig.meters()), clock::timeCs);
+    }
+
+    /** The chart tap for the settings' charted parameters; one named in no dictionary is reported and left out. */
+    public static TraceTap tapFor(ParameterDictionary dictionary, ConsoleSettings settings, Consumer<String> faults) {
+        List<String> charted = new ArrayList<>();
+        for (String p : settings.chartedParameters()) {
+            if (dictionary.indexOf(p) >= 0) {
+                charted.add(p);
+            } else {
+                faults.accept("chart parameter '" + p + "' is not in the dictionary; its lane stays empty");
+            }
+        }
+        return new TraceTap(dictionary, charted.isEmpty() ? List.of(dictionary.parameters().get(0).name()) : charted,
+                RING_SAMPLES);
     }
 
     public void start() {

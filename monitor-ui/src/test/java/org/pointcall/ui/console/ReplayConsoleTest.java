@@ -41,7 +41,7 @@ import org.pointcall.shared.demo.DemoFiles;
 import org.pointcall.shared.dictionary.DictionaryFiles;
 import org.pointcall.shared.dictionary.ParameterDictionary;
 import org.pointcall.ui.demo.LiveConsole;
-import org.pointcall.ui.demo.ReplayTransport;
+import org.pointcall.ui.demo.ReplayDeck;
 import org.pointcall.ui.demo.SessionDesk;
 import org.pointcall.ui.settings.ConsoleSettings;
 import org.testfx.api.FxRobot;
@@ -62,15 +62,16 @@ class ReplayConsoleTest {
 
     private final ParameterDictionary dict = DemoFiles.dictionary();
     private final TestCard card = DemoFiles.card();
-    private LiveConsole live;
-    private ReplayControl control;
+    private ReplayDeck deck;
     private ArchiveReader reader;
-    private Thread player;
     private ConsoleView view;
 
     /** 60 s of the demo sortie at 32 Hz, recorded with the data time as arrival time. */
     private Path record() {
         Path file = dir.resolve("sortie.pcsa");
+        if (java.nio.file.Files.exists(file)) {
+            return file; // recorded once for the class; archives are never overwritten
+        }
         Recorder rec = Recorder.start(file, RecorderPolicy.DEFAULT, System::nanoTime, a -> { });
         long[] now = {0};
         StreamEncoder enc = new StreamEncoder(1, StreamEncoder.newEpoch(), dict, DictionaryFiles.toYaml(dict),
@@ -103,20 +104,12 @@ class ReplayConsoleTest {
     @Start
     void start(Stage stage) throws Exception {
         reader = ArchiveReader.open(record());
-        SessionDesk desk = new SessionDesk(card, dict);
         var model = ConsoleViewTest.model();
-        live = new LiveConsole(0, dict, ConsoleSettings.defaults(), desk,
+        deck = new ReplayDeck(reader, card, dict, ConsoleSettings.defaults(),
                 (d, l) -> new CardSession(SessionSetup.of(d, card, model.model(), model.metadata().description(),
-                        CardAnalysers.standard()), l), null, line -> { }, false);
-        control = new ReplayControl(1, false);
-        long first = reader.firstTimeNs();
-        desk.transport(new ReplayTransport(control, first, (reader.lastTimeNs() - first) / 1e9, id -> null));
-        live.start();
-        player = new Thread(() -> new Replayer(new ArchiveSource(reader), ReplayTargets.pipeline(live.rig().pipeline()),
-                ReplayClock.SYSTEM, control).run(), "replay");
-        player.setDaemon(true);
-        player.start();
-        view = new ConsoleView(new ConsoleSetup("replay test", live.link(), live.traces(), ConsoleSettings.defaults(),
+                        CardAnalysers.standard()), l), line -> { });
+        deck.start(1, false);
+        view = new ConsoleView(new ConsoleSetup("replay test", deck.link(), deck.traces(), ConsoleSettings.defaults(),
                 null, true, 30, TraceDrawing.ENVELOPE));
         stage.setScene(new Scene(view.root(), 1400, 900));
         stage.show();
@@ -126,9 +119,7 @@ class ReplayConsoleTest {
 
     @AfterEach
     void stop() throws Exception {
-        control.stop();
-        player.join(5000);
-        live.close();
+        deck.close();
         reader.close();
         WaitForAsyncUtils.asyncFx(() -> view.stop()).get(5, TimeUnit.SECONDS);
     }
@@ -152,7 +143,7 @@ class ReplayConsoleTest {
         waitUntil(() -> text(robot, "transport-position").contains("playing") && shownSeconds(robot) >= 2);
 
         robot.type(KeyCode.SPACE);
-        waitUntil(() -> control.state() == ReplayState.PAUSED);
+        waitUntil(() -> deck.control().state() == ReplayState.PAUSED);
         waitUntil(() -> text(robot, "transport-position").contains("PAUSED"));
         int pausedAt = shownSeconds(robot);
         String lane = text(robot, "lane-value-Hp");
@@ -162,10 +153,44 @@ class ReplayConsoleTest {
 
         robot.type(KeyCode.RIGHT); // 10 s forward
         robot.type(KeyCode.SPACE);
-        waitUntil(() -> control.state() == ReplayState.PLAYING);
+        waitUntil(() -> deck.control().state() == ReplayState.PLAYING);
         // at 1x, playing alone would need 10 s to get there: within 6 s only the seek does it
         WaitForAsyncUtils.waitFor(6, TimeUnit.SECONDS, () -> shownSeconds(robot) >= pausedAt + 10);
         assertTrue(text(robot, "transport-position").contains("playing"), text(robot, "transport-position"));
         assertTrue(Double.parseDouble(text(robot, "lane-value-Hp")) > 5000, "the traces go on after the seek");
+    }
+
+    /** Seconds of data time the header shows ("T+hh:mm:ss"). */
+    private static int headerSeconds(FxRobot robot) {
+        String t = text(robot, "header-time");
+        int i = t.indexOf("T+");
+        String[] f = t.substring(i + 2, i + 10).split(":");
+        return Integer.parseInt(f[0]) * 3600 + Integer.parseInt(f[1]) * 60 + Integer.parseInt(f[2]);
+    }
+
+    /**
+     * Back 10 s: the screen (transport, data clock, traces and card) shows that moment again, as it was then,
+     * and the replay plays on from there.
+     */
+    @Test
+    void leftArrowGoesBackAndTheScreenShowsThatMomentAgain(FxRobot robot) throws Exception {
+        waitUntil(() -> text(robot, "transport-position").contains("playing") && shownSeconds(robot) >= 2);
+        robot.type(KeyCode.RIGHT);
+        robot.type(KeyCode.RIGHT); // 20 s on
+        waitUntil(() -> shownSeconds(robot) >= 22 && text(robot, "transport-position").contains("playing"));
+        int before = shownSeconds(robot);
+        var firstPass = deck.live();
+        robot.type(KeyCode.LEFT); // 10 s back
+        WaitForAsyncUtils.waitFor(6, TimeUnit.SECONDS, () -> deck.live() != firstPass
+                && text(robot, "transport-position").contains("playing") && shownSeconds(robot) <= before - 6);
+        int after = shownSeconds(robot);
+        WaitForAsyncUtils.waitFor(3, TimeUnit.SECONDS, () -> Math.abs(headerSeconds(robot) - after) <= 2);
+        Thread.sleep(2000);
+        int later = shownSeconds(robot);
+        assertTrue(later >= after + 1 && later <= after + 4, "it plays on from there at 1x: " + after + " -> " + later);
+        assertTrue(Math.abs(headerSeconds(robot) - later) <= 2,
+                "the data clock went back with it: " + text(robot, "header-time") + " at " + later);
+        double hp = Double.parseDouble(text(robot, "lane-value-Hp"));
+        assertTrue(hp > 5000, "the traces go on after the jump back: Hp " + hp);
     }
 }

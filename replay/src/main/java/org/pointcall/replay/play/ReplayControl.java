@@ -18,6 +18,7 @@ public final class ReplayControl {
     private long seekToNs;
     private int version;
     private volatile long positionNs = Long.MIN_VALUE;
+    private volatile long catchUpToNs = Long.MIN_VALUE;
 
     /** @param speed {@link #MAX_SPEED}, or 0.1 to 100 times real time */
     public ReplayControl(double speed, boolean startPaused) {
@@ -74,6 +75,24 @@ public final class ReplayControl {
         seekPending = true;
         seekToNs = Math.max(timeNs, Long.MIN_VALUE + 1);
         changed();
+    }
+
+    /**
+     * Plays every packet before archive time {@code timeNs} as fast as the target takes it, then goes on at the
+     * speed asked: a jump that still passes everything in between through the pipeline, so that points, verdicts
+     * and alarms on the way are seen as they would have been live. Pausing does not stop a catch-up (the
+     * position is reached first, then the replay holds).
+     */
+    public synchronized void catchUpTo(long timeNs) {
+        catchUpToNs = timeNs;
+        changed();
+    }
+
+    /** Archive time a catch-up is running to, or Long.MIN_VALUE when none runs. */
+    public long catchingUpTo() {
+        long c = catchUpToNs;
+        long p = positionNs;
+        return c != Long.MIN_VALUE && (p == Long.MIN_VALUE || p < c) ? c : Long.MIN_VALUE;
     }
 
     public synchronized void stop() {

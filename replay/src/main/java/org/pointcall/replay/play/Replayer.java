@@ -92,6 +92,14 @@ public final class Replayer {
 
     /** Waits until {@code dataNs} is due; false when a seek or stop means this packet is not to be played. */
     private boolean waitFor(long dataNs) {
+        long catchUp = control.catchingUpTo();
+        if (catchUp != Long.MIN_VALUE && dataNs < catchUp) {
+            if (control.state() == ReplayState.STOPPED || control.seekPending()) {
+                return false;
+            }
+            anchored = false; // paced play starts again from the packet that ends the catch-up
+            return true;
+        }
         while (true) {
             if (control.version() != seenVersion && !transportChanged()) {
                 return false;

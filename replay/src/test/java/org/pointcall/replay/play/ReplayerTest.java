@@ -61,6 +61,32 @@ class ReplayerTest {
     }
 
     @Test
+    void aCatchUpPlaysEverythingBeforeItsTimeAtOnceThenPacesFromThere() {
+        int k = data.times.size() / 2;
+        long until = data.times.get(k);
+        ReplayControl control = new ReplayControl(2, false);
+        control.catchUpTo(until);
+        ReplaySummary s = play(control, i -> { });
+        assertEquals(data.packets.size(), s.packets(), "nothing is skipped by a catch-up");
+        assertEquals(data.times, playedData);
+        long c0 = playedAt.get(0);
+        int firstPaced = 0;
+        while (data.times.get(firstPaced) < until) {
+            assertEquals(c0, playedAt.get(firstPaced), "packet " + firstPaced + " is before the catch-up's end");
+            firstPaced++;
+        }
+        long cK = playedAt.get(firstPaced);
+        long prev = cK;
+        for (int i = firstPaced; i < playedAt.size(); i++) {
+            long due = Math.max(prev, cK + (long) ((playedData.get(i) - until) / 2));
+            assertEquals(due, playedAt.get(i), "packet " + i + " is paced at 2x from the catch-up's end");
+            prev = due;
+        }
+        assertTrue(playedAt.get(playedAt.size() - 1) > c0, "the paced half took time");
+        assertEquals(Long.MIN_VALUE, control.catchingUpTo(), "the catch-up is over");
+    }
+
+    @Test
     void atMaxSpeedNothingWaits() {
         ReplaySummary s = play(new ReplayControl(ReplayControl.MAX_SPEED, false), i -> { });
         assertEquals(data.packets.size(), s.packets());
