@@ -30,22 +30,53 @@ final class ChartStack {
     private double nowS = Double.NaN;
     private final SampleRing.Reader reader = this::onSample;
 
+    private final TraceDrawing drawing;
+    private int layout = -1;
+    private int colours;
+
     ChartStack(ConsoleSettings settings, TraceFeed feed, TraceDrawing drawing) {
         this.feed = feed;
+        this.drawing = drawing;
         node.setId("chart-stack");
-        int colour = 0;
-        for (TraceGroup g : settings.groups()) {
+        build(settings.groups(), false);
+        VBox.setVgrow(node, Priority.ALWAYS);
+    }
+
+    /**
+     * Shows {@code groups} from now on; a parameter shown before keeps its lane and history. Refuses (the stack
+     * unchanged) what the feed cannot chart, with the feed's reasons.
+     */
+    void regroup(List<TraceGroup> groups) {
+        build(groups, true);
+    }
+
+    private void build(List<TraceGroup> groups, boolean select) {
+        List<String> params = new ArrayList<>();
+        for (TraceGroup g : groups) {
+            params.addAll(g.parameters());
+        }
+        if (select && feed != null) {
+            layout = feed.select(params); // throws, naming what is wrong, before anything changes
+        } else if (feed != null) {
+            layout = feed.layoutNumber();
+        }
+        Map<String, LaneChart> old = new HashMap<>();
+        for (LaneChart l : lanes) {
+            old.putIfAbsent(l.parameter(), l);
+        }
+        lanes.clear();
+        node.getChildren().clear();
+        for (TraceGroup g : groups) {
             Label title = new Label(g.name().toUpperCase(java.util.Locale.ROOT));
             title.getStyleClass().add("group-title");
             node.getChildren().add(title);
             for (int k = 0; k < g.parameters().size(); k++) {
                 String p = g.parameters().get(k);
-                int ch = feed == null ? -1 : feed.channel(p);
-                String unit = ch >= 0 ? feed.units().get(ch) : "";
-                LaneChart lane = new LaneChart(p, unit, colour++, HISTORY_SAMPLES, drawing);
-                if (k < g.parameters().size() - 1) {
-                    lane.quietTimeAxis();
+                LaneChart lane = old.remove(p);
+                if (lane == null) {
+                    lane = new LaneChart(p, feed == null ? "" : feed.unit(p), colours++, HISTORY_SAMPLES, drawing);
                 }
+                lane.quietTimeAxis(k < g.parameters().size() - 1);
                 lanes.add(lane);
                 node.getChildren().add(lane.node());
             }
@@ -54,7 +85,6 @@ final class ChartStack {
         for (int i = 0; i < lanes.size(); i++) {
             channelOfLane[i] = feed == null ? -1 : feed.channel(lanes.get(i).parameter());
         }
-        VBox.setVgrow(node, Priority.ALWAYS);
     }
 
     VBox node() {
@@ -83,6 +113,9 @@ final class ChartStack {
     static final double RESTART_S = 1.0;
 
     private void onSample(long timeNs, double[] values) {
+        if (values[0] != layout) {
+            return; // written under an earlier layout, while the screen was changing its lanes
+        }
         double t = timeNs / 1e9;
         if (t < nowS - RESTART_S) {
             clear(); // live data never goes back this far; a replay's jump back does: the traces start again

@@ -3,6 +3,7 @@ package org.pointcall.ui.console;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Locale;
 
 import javafx.animation.AnimationTimer;
@@ -26,6 +27,8 @@ import org.pointcall.ui.desk.DeskSnapshot;
 import org.pointcall.ui.desk.Outcome;
 import org.pointcall.ui.desk.PointMark;
 import org.pointcall.ui.settings.ConsoleSettings;
+import org.pointcall.ui.settings.SettingsFile;
+import org.pointcall.ui.settings.TraceGroup;
 
 /**
  * The console's window content and its screen pump. It holds no domain logic: it draws the latest
@@ -63,6 +66,8 @@ public final class ConsoleView {
     private double redrawHz;
     private long pumpRedraws;
 
+    private final LanesPanel lanes;
+
     public ConsoleView(ConsoleSetup setup) {
         this.setup = setup;
         this.settings = setup.settings();
@@ -70,7 +75,9 @@ public final class ConsoleView {
         charts = new ChartStack(settings, setup.traces(), setup.drawing());
         transport = new TransportBar(setup.link()::send, card::selected);
 
-        StackPane centre = new StackPane(charts.node(), verdict.node());
+        lanes = new LanesPanel(setup.traces() == null ? List.of() : setup.traces().names(),
+                p -> setup.traces() == null ? "" : setup.traces().unit(p));
+        StackPane centre = new StackPane(charts.node(), verdict.node(), lanes.node());
         centre.setId("centre");
         split = new SplitPane(card.node(), centre, point.node());
         split.setId("columns");
@@ -98,6 +105,8 @@ public final class ConsoleView {
         point.ack.setOnAction(e -> acknowledge());
         alarms.ack.setOnAction(e -> acknowledge());
         point.note.setOnAction(e -> finishCall());
+        lanes.apply.setOnAction(e -> applyLanes());
+        lanes.cancel.setOnAction(e -> closeLanes());
         point.note.setDisable(true);
 
         pump = new AnimationTimer() {
@@ -202,6 +211,16 @@ public final class ConsoleView {
 
     private void onKey(KeyEvent e) {
         boolean typing = e.getTarget() instanceof TextInputControl;
+        if (lanes.showing()) {
+            if (e.getCode() == KeyCode.ESCAPE) {
+                closeLanes();
+                e.consume();
+            } else if (e.getCode() == KeyCode.ENTER && e.isShortcutDown()) {
+                applyLanes();
+                e.consume();
+            }
+            return; // the editor has the keys while it is open
+        }
         if (typing) {
             if (e.getCode() == KeyCode.ESCAPE) {
                 cancelCall();
@@ -220,6 +239,7 @@ public final class ConsoleView {
             case OPEN_BRACKET -> stepSpan(-1);
             case CLOSE_BRACKET -> stepSpan(1);
             case ESCAPE -> cancelCall();
+            case L -> lanes.show(settings.groups());
             default -> handled = replayKey(e);
         }
         if (handled) {
@@ -310,6 +330,37 @@ public final class ConsoleView {
         pendingPoint = null;
         point.note.clear();
         point.note.setDisable(true);
+        root.requestFocus();
+    }
+
+    /** Applies the editor's groups: the charts change at once and the layout file is written straight away. */
+    private void applyLanes() {
+        List<TraceGroup> groups = lanes.groups();
+        if (groups == null) {
+            return;
+        }
+        try {
+            charts.regroup(groups);
+        } catch (IllegalArgumentException e) {
+            lanes.problem(e.getMessage());
+            return;
+        }
+        settings = settings.withGroups(groups);
+        String saved = "";
+        if (setup.settingsFile() != null) {
+            try {
+                SettingsFile.save(setup.settingsFile(), currentSettings());
+                saved = "; saved to " + setup.settingsFile();
+            } catch (PointcallException e) {
+                saved = "; not saved: " + e.getMessage();
+            }
+        }
+        closeLanes();
+        point.hint.setText("chart groups applied" + saved);
+    }
+
+    private void closeLanes() {
+        lanes.hide();
         root.requestFocus();
     }
 

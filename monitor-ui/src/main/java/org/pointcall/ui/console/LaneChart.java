@@ -135,14 +135,19 @@ final class LaneChart {
         }
     };
 
-    /** Hides the time labels of a lane that is not the last of its group. */
-    void quietTimeAxis() {
-        xAxis.getStyleClass().add("quiet-axis");
-        xAxis.setPrefHeight(6);
-        xAxis.setMaxHeight(6);
+    /** Hides the time labels of a lane that is not the last of its group (quiet), or shows them. */
+    void quietTimeAxis(boolean quiet) {
+        xAxis.getStyleClass().remove("quiet-axis");
+        if (quiet) {
+            xAxis.getStyleClass().add("quiet-axis");
+        }
+        xAxis.setPrefHeight(quiet ? 6 : USE_COMPUTED);
+        xAxis.setMaxHeight(quiet ? 6 : USE_COMPUTED);
         // nothing to draw on it: an invisible axis costs the software renderer nothing per frame
-        xAxis.setVisible(false);
+        xAxis.setVisible(!quiet);
     }
+
+    private static final double USE_COMPUTED = javafx.scene.layout.Region.USE_COMPUTED_SIZE;
 
     /** The ErrorDataSetRenderer, counting the renders ChartFX really does (for the benchmark). */
     private static final class CountingRenderer extends ErrorDataSetRenderer {

@@ -94,17 +94,7 @@ public final class SettingsFile {
                     s = s.withSplits(Double.parseDouble(c[0].strip()), Double.parseDouble(c[1].strip()));
                 } else if (key.startsWith("group.")) {
                     int n = Integer.parseInt(key.substring(6));
-                    int colon = value.indexOf(':');
-                    if (colon < 1) {
-                        throw new IllegalArgumentException("a group is 'NAME: P1, P2, ...'");
-                    }
-                    List<String> params = new ArrayList<>();
-                    for (String p : value.substring(colon + 1).split(",")) {
-                        if (!p.isBlank()) {
-                            params.add(p.strip());
-                        }
-                    }
-                    groups.put(n, new TraceGroup(value.substring(0, colon).strip(), params));
+                    groups.put(n, TraceGroup.parse(value));
                 } else {
                     problems.add(at + "unknown key '" + key + "' (known: span-s, window, columns, group.N)");
                 }
@@ -127,14 +117,13 @@ public final class SettingsFile {
 
     /** Writes {@code s} to {@code file}, creating its folder. */
     public static void save(Path file, ConsoleSettings s) {
-        StringBuilder b = new StringBuilder("# pointcall console layout, rewritten when the console closes\n");
+        StringBuilder b = new StringBuilder("# pointcall console layout, rewritten when the console closes and when its chart groups change\n");
         b.append(String.format(Locale.ROOT, "span-s = %s%n", trim(s.spanS())));
         b.append(String.format(Locale.ROOT, "window = %d x %d%n", Math.round(s.widthPx()), Math.round(s.heightPx())));
         b.append(String.format(Locale.ROOT, "columns = %.3f, %.3f%n", s.cardSplit(), s.pointSplit()));
         int n = 1;
         for (TraceGroup g : s.groups()) {
-            b.append("group.").append(n++).append(" = ").append(g.name()).append(": ")
-                    .append(String.join(", ", g.parameters())).append('\n');
+            b.append("group.").append(n++).append(" = ").append(g.text()).append('\n');
         }
         try {
             Path parent = file.toAbsolutePath().getParent();

@@ -71,6 +71,23 @@ public final class SampleRing {
         written.lazySet(w + 1);
     }
 
+    /**
+     * Writer side: channel 0 gets {@code tag}, channel {@code c + 1} the frame value at {@code slots[c]} (NaN for a
+     * slot below 0).
+     */
+    public void write(long t, double tag, double[] frameValues, int[] slots) {
+        long w = written.get();
+        int slot = (int) (w & mask);
+        timeNs[slot] = t;
+        int base = slot * channels;
+        values[base] = tag;
+        for (int c = 1; c < channels; c++) {
+            int s = slots[c - 1];
+            values[base + c] = s < 0 ? Double.NaN : frameValues[s];
+        }
+        written.lazySet(w + 1);
+    }
+
     /** Samples written so far. */
     public long written() {
         return written.get();

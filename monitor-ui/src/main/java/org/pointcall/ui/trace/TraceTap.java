@@ -8,42 +8,32 @@ import org.pointcall.shared.dictionary.ParameterDictionary;
 import org.pointcall.shared.error.PointcallException;
 
 /**
- * Frame tap on the pipeline thread that copies the charted parameters of each frame into a {@link SampleRing}.
- * Slots are resolved once, here; per frame it costs a handful of array stores and never waits for the screen.
- * Values are in the dictionary's engineering units, as the charts show them.
+ * Frame tap on the pipeline thread that copies the charted parameters of each frame into a {@link SampleRing},
+ * under the layout the screen selected last ({@link TraceFeed#select}), whose number goes with every sample. Per
+ * frame it costs one volatile read and a handful of array stores, and it never waits for the screen. Values are
+ * in the dictionary's engineering units, as the charts show them.
  */
 public final class TraceTap implements FrameSink {
-    private final List<String> parameters;
-    private final int[] slots;
     private final SampleRing ring;
     private final TraceFeed feed;
 
+    /** @param parameters charted at first; each must be in the dictionary */
     public TraceTap(ParameterDictionary dictionary, List<String> parameters, int capacity) {
-        this.parameters = List.copyOf(parameters);
-        this.slots = new int[this.parameters.size()];
-        for (int i = 0; i < slots.length; i++) {
-            String p = this.parameters.get(i);
-            slots[i] = dictionary.indexOf(p);
-            if (slots[i] < 0) {
-                throw new PointcallException("chart parameter '" + p + "' is not in the dictionary '"
-                        + dictionary.name() + "'");
-            }
+        this.ring = new SampleRing(TraceFeed.MAX_LANES + 1, capacity);
+        try {
+            this.feed = new TraceFeed(dictionary, parameters, ring);
+        } catch (IllegalArgumentException e) {
+            throw new PointcallException("charts: " + e.getMessage(), e);
         }
-        this.ring = new SampleRing(slots.length, capacity);
-        List<String> units = new java.util.ArrayList<>();
-        for (int slot : slots) {
-            units.add(dictionary.parameters().get(slot).unit().symbol());
-        }
-        this.feed = new TraceFeed(this.parameters, units, ring);
     }
 
-    /** The ring with its channel names and units, for the charts. */
+    /** The ring with its layout, for the charts. */
     public TraceFeed feed() {
         return feed;
     }
 
     public List<String> parameters() {
-        return parameters;
+        return feed.parameters();
     }
 
     public SampleRing ring() {
@@ -52,6 +42,7 @@ public final class TraceTap implements FrameSink {
 
     @Override
     public void onFrame(Frame frame) {
-        ring.write(frame.timeNs(), frame.values(), slots);
+        TraceFeed.Layout l = feed.layout();
+        ring.write(frame.timeNs(), l.number(), frame.values(), l.slots());
     }
 }

@@ -63,6 +63,7 @@ class ReplayConsoleTest {
     private final ParameterDictionary dict = DemoFiles.dictionary();
     private final TestCard card = DemoFiles.card();
     private ReplayDeck deck;
+    private Path settingsFile;
     private ArchiveReader reader;
     private ConsoleView view;
 
@@ -109,8 +110,9 @@ class ReplayConsoleTest {
                 (d, l) -> new CardSession(SessionSetup.of(d, card, model.model(), model.metadata().description(),
                         CardAnalysers.standard()), l), line -> { });
         deck.start(1, false);
+        settingsFile = dir.resolve("console-" + System.nanoTime() + ".conf");
         view = new ConsoleView(new ConsoleSetup("replay test", deck.link(), deck.traces(), ConsoleSettings.defaults(),
-                null, true, 30, TraceDrawing.ENVELOPE));
+                settingsFile, true, 30, TraceDrawing.ENVELOPE));
         stage.setScene(new Scene(view.root(), 1400, 900));
         stage.show();
         view.root().requestFocus();
@@ -192,5 +194,36 @@ class ReplayConsoleTest {
                 "the data clock went back with it: " + text(robot, "header-time") + " at " + later);
         double hp = Double.parseDouble(text(robot, "lane-value-Hp"));
         assertTrue(hp > 5000, "the traces go on after the jump back: Hp " + hp);
+    }
+
+    /**
+     * L opens the chart-group editor; a group naming a parameter the stream lacks is refused with its name and
+     * nothing changes; good groups change the lanes at once, each lane shows its own parameter's values (Nz near
+     * 1 g, not another channel's), a lane kept keeps its value, and the layout file is written.
+     */
+    @Test
+    void chartGroupsAreEditedOnScreenAndKept(FxRobot robot) throws Exception {
+        waitUntil(() -> text(robot, "transport-position").contains("playing") && shownSeconds(robot) >= 2);
+        robot.type(KeyCode.L);
+        waitUntil(() -> robot.lookup("#lanes-panel").query().isVisible());
+        javafx.scene.control.TextArea area = robot.lookup("#lanes-text").query();
+        robot.interact(() -> area.setText("attitude: Pitch, Nz\nspeed: KCAS, Bogus\n"));
+        robot.clickOn("#lanes-apply");
+        waitUntil(() -> text(robot, "lanes-message").contains("Bogus"));
+        assertTrue(robot.lookup("#lanes-panel").query().isVisible(), "a refused edit leaves the editor open");
+        assertTrue(robot.lookup("#lane-chart-Hp").tryQuery().isPresent(), "and the lanes as they were");
+
+        robot.interact(() -> area.setText("attitude: Pitch, Nz\nspeed: KCAS\n"));
+        robot.press(KeyCode.CONTROL).type(KeyCode.ENTER).release(KeyCode.CONTROL);
+        waitUntil(() -> !robot.lookup("#lanes-panel").query().isVisible());
+        assertTrue(robot.lookup("#lane-chart-Hp").tryQuery().isEmpty(), "Hp is no longer charted");
+        waitUntil(() -> text(robot, "lane-value-Nz").matches("-?[0-9.]+"));
+        double nz = Double.parseDouble(text(robot, "lane-value-Nz"));
+        assertTrue(Math.abs(nz - 1) < 3, "the Nz lane shows Nz: " + nz);
+        double kcas = Double.parseDouble(text(robot, "lane-value-KCAS"));
+        assertTrue(kcas > 100 && kcas < 500, "the KCAS lane shows KCAS: " + kcas);
+        String file = java.nio.file.Files.readString(settingsFile);
+        assertTrue(file.contains("group.1 = attitude: Pitch, Nz") && file.contains("group.2 = speed: KCAS")
+                && !file.contains("group.3"), file);
     }
 }
