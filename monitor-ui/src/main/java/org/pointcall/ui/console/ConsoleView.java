@@ -67,6 +67,7 @@ public final class ConsoleView {
     private long pumpRedraws;
 
     private final LanesPanel lanes;
+    private boolean swallowTyped;
 
     public ConsoleView(ConsoleSetup setup) {
         this.setup = setup;
@@ -98,6 +99,13 @@ public final class ConsoleView {
         root.getStylesheets().add(ConsoleView.class.getResource("console.css").toExternalForm());
         root.setFocusTraversable(true);
         root.addEventFilter(KeyEvent.KEY_PRESSED, this::onKey);
+        // the key that opens the group editor must not also type itself into it
+        root.addEventFilter(KeyEvent.KEY_TYPED, e -> {
+            if (swallowTyped) {
+                swallowTyped = false;
+                e.consume();
+            }
+        });
 
         point.arm.setOnAction(e -> arm());
         point.good.setOnAction(e -> beginCall(Outcome.GOOD));
@@ -239,7 +247,10 @@ public final class ConsoleView {
             case OPEN_BRACKET -> stepSpan(-1);
             case CLOSE_BRACKET -> stepSpan(1);
             case ESCAPE -> cancelCall();
-            case L -> lanes.show(settings.groups());
+            case L -> {
+                swallowTyped = true;
+                lanes.show(settings.groups());
+            }
             default -> handled = replayKey(e);
         }
         if (handled) {

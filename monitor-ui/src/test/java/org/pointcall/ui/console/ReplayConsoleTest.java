@@ -207,6 +207,8 @@ class ReplayConsoleTest {
         robot.type(KeyCode.L);
         waitUntil(() -> robot.lookup("#lanes-panel").query().isVisible());
         javafx.scene.control.TextArea area = robot.lookup("#lanes-text").query();
+        assertEquals("energy: Hp, KCAS, Mach\npitch: AoA, Pitch, Nz, Elevator\n", area.getText(),
+                "the editor opens on the groups shown, and the L that opened it is not typed into it");
         robot.interact(() -> area.setText("attitude: Pitch, Nz\nspeed: KCAS, Bogus\n"));
         robot.clickOn("#lanes-apply");
         waitUntil(() -> text(robot, "lanes-message").contains("Bogus"));
