@@ -241,7 +241,10 @@ public final class WatchFeed implements AutoCloseable {
                 consumer.seek(tp, o.offset());
             }
         }
-        consumer.seekToEnd(toEnd);
+        if (!toEnd.isEmpty()) {
+            // an empty list would mean every assigned partition, the events and dictionaries too
+            consumer.seekToEnd(toEnd);
+        }
         eventsEnd = new HashMap<>(consumer.endOffsets(parts.get(settings.eventsTopic())));
         assigned = true;
         return true;

@@ -287,6 +287,23 @@ class SharedSessionTest {
     }
 
     @Test
+    void aConsoleThatJoinsAfterTheSortieChartsItsLastSecondsAndShowsEveryPoint() throws Exception {
+        // joining late, the console reads the events from their beginning and the frames from --backfill ago
+        try (WatchConsole late = new WatchConsole(settings, 300, ConsoleSettings.defaults().chartedParameters(), null,
+                l -> { })) {
+            late.start();
+            assertTrue(late.awaitSession(TimeUnit.SECONDS.toNanos(30)), "the late console finds the session");
+            waitFor(() -> late.feed().caughtUp() && late.desk().mirror() != null
+                    && points(late.desk().mirror().outcomes()).equals(points(firstPoints.points())), 30,
+                    "the late console has every point");
+            waitFor(() -> late.traces() != null && late.traces().ring().written() > 10_000, 30,
+                    "the late console charts the frames it backfilled");
+            waitFor(() -> late.link().latest().card().size() == 2, 10, "a snapshot with the card");
+            assertEquals(PointMark.REPEAT, late.link().latest().card().get(1).mark());
+        }
+    }
+
+    @Test
     void theWatchingScreenSaysItIsReadOnlyAndRefusesCalls() throws Exception {
         FxToolkit.registerPrimaryStage();
         ConsoleView[] view = new ConsoleView[1];
