@@ -27,14 +27,14 @@ import org.pointcall.ui.desk.VerdictCard;
  * ({@link SessionMirror}) and shown through the same {@link SessionDesk} a live console uses, so both screens
  * read alike. It is read-only: arming and calls are the first console's; here they are refused with a line in the
  * log. Acknowledging a verdict or an alarm is this screen's own record of what its viewer has seen, as on any
- * console. The sortie in the header carries the words {@value #MARK}.
+ * console. The sortie in the header carries the word {@value #MARK}, the window title and the log say read-only.
  *
  * <p>Threads: the {@link WatchFeed.Listener} methods on the feed's thread, the {@link DeskModel} ones on the
  * publisher's.
  */
 public final class WatchDesk implements DeskModel, WatchFeed.Listener {
     /** What the header says after the sortie. */
-    public static final String MARK = "WATCHING, read-only";
+    public static final String MARK = "WATCHING";
     /** What an arm or a call gets at a watching console. */
     public static final String REFUSED = "watching: arming and calls are made at the first console";
     private static final int NOTES_KEPT = 100;
@@ -65,7 +65,8 @@ public final class WatchDesk implements DeskModel, WatchFeed.Listener {
         SessionDesk desk = new SessionDesk(card, dictionary);
         desk.bind(new Watched(mirror, dataTimeNs));
         current = new Current(start, mirror, desk);
-        note("watching " + start.source() + " (session " + start.session() + ")");
+        note("watching " + start.source() + " (session " + start.session() + "), read-only: " + REFUSED.substring(
+                REFUSED.indexOf(':') + 2));
     }
 
     @Override
