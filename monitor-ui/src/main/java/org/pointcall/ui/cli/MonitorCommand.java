@@ -54,8 +54,8 @@ import picocli.CommandLine.Model.CommandSpec;
                 + "and the card session (detector, card matching, live bands, safety limits, analysis, verdicts) "
                 + "and prints one line per event: point begun, band status changed, point ended with its verdict, "
                 + "unplanned manoeuvre, limit alarm. With --out, writes points.json and points.csv when it stops "
-                + "(after --until-idle seconds without a datagram, or on Ctrl-C). With --share kafka://HOST:PORT/PREFIX "
-                + "it also publishes the session (every datagram, the dictionary, the card and every event) for "
+                + "(after --until-idle seconds without a datagram, or on Ctrl-C). With --share "
+                + "kafka://HOST:PORT/PREFIX it also publishes the session (every datagram, the dictionary, the card and every event) for "
                 + "consoles elsewhere to watch; with --watch instead of --listen it follows such a shared session, "
                 + "read-only, from its beginning. The tool proposes; the team decides.%n")
 public final class MonitorCommand implements Callable<Integer> {
