@@ -5,7 +5,8 @@
  * <h2>Topics and records</h2>
  * {@code <prefix>.frames}: one record per wire packet (the value, opaque here), key = stream id as a 4-byte
  * big-endian int ({@link org.pointcall.ingest.kafka.StreamKey}), so each stream lives in one partition and keeps its
- * order. {@code <prefix>.events}: point events, verdicts, alarms, operator calls, keyed likewise.
+ * order. {@code <prefix>.events}: a shared session's start, events (points, verdicts, alarms, operator calls) and
+ * live views, keyed likewise (layout: monitor-ui's {@code ui.share.ShareRecords}).
  * {@code <prefix>.dictionary}: compacted, one partition, key = dictionary hash. {@link
  * org.pointcall.ingest.kafka.KafkaTopics#ensure} creates whichever are missing.
  *

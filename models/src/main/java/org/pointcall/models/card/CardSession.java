@@ -67,6 +67,8 @@ public final class CardSession {
      */
     public static final double REJOIN_S = 15.0;
     private static final String DISCARDED = "abandoned: the detector discarded it";
+    /** Start of the note of a flight joined with a discarded stretch before it (which it then replaces). */
+    public static final String JOINED_NOTE = "joined with the stretch";
     /** Alarm changes kept in a snapshot. */
     public static final int RECENT_ALARMS = 10;
     private static final int NOTICES = 5;
@@ -377,7 +379,7 @@ public final class CardSession {
                     && !history.isEmpty() && prev.beginNs() >= history.firstNs()) {
                 begin = prev.beginNs();
                 outcomes.remove(k);
-                joined = String.format(java.util.Locale.ROOT, "joined with the stretch from %.1f s to %.1f s that "
+                joined = String.format(java.util.Locale.ROOT, JOINED_NOTE + " from %.1f s to %.1f s that "
                         + "the detector had discarded: one flight of %s", prev.beginNs() / 1e9, prev.endNs() / 1e9,
                         a.point.id());
                 // the detector's instants were found on the kept stretch alone: the analysis finds them again

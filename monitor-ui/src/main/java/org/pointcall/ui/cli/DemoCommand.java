@@ -36,6 +36,8 @@ import org.pointcall.ui.desk.DeskSnapshot;
 import org.pointcall.ui.desk.LogEntry;
 import org.pointcall.ui.settings.ConsoleSettings;
 import org.pointcall.ui.settings.SettingsFile;
+import org.pointcall.ui.share.SessionShare;
+import org.pointcall.ui.share.ShareAddress;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -82,6 +84,10 @@ public final class DemoCommand implements Callable<Integer> {
     @Option(names = "--no-record", description = "do not record the sortie")
     boolean noRecord;
 
+    @Option(names = "--share", paramLabel = "kafka://HOST:PORT[/PREFIX]", description = "also publish the session on "
+            + "Kafka for watching consoles ('console --watch'), or give a Kafka settings file")
+    String share;
+
     @Spec
     CommandSpec spec;
 
@@ -108,12 +114,24 @@ public final class DemoCommand implements Callable<Integer> {
         List<String> faults = java.util.Collections.synchronizedList(new ArrayList<>());
         LoadedModel<Classifier> model = DetectorModel.load(null);
         SessionDesk desk = new SessionDesk(card, dict);
+        SessionShare shared = share == null ? null : new SessionShare(ShareAddress.parse(share, "--share"),
+                cardFile == null ? DemoFiles.cardText() : MonitorCommand.readCard(cardFile), faults::add);
         Recorder recorder = noRecord ? null : Recorder.startIn(recordDir, RecorderPolicy.DEFAULT, System::nanoTime,
                 a -> faults.add("recorder: " + a));
+        java.util.function.Function<org.pointcall.ingest.udp.DatagramHandler, org.pointcall.ingest.udp.DatagramHandler>
+                tee = h -> {
+                    org.pointcall.ingest.udp.DatagramHandler r = recorder == null ? h : recorder.tee(h);
+                    return shared == null ? r : shared.tee(r);
+                };
         try (LiveConsole live = new LiveConsole(0, dict, settings, desk,
                 (d, listener) -> new CardSession(SessionSetup.of(d, card, model.model(), model.metadata().description(),
                         CardAnalysers.standard()), listener),
-                recorder == null ? null : recorder::tee, faults::add)) {
+                recorder == null && shared == null ? null : tee, faults::add)) {
+            if (shared != null) {
+                live.share(shared, "demo simulator over udp");
+                out.println("sharing on " + shared.where() + " ('console --watch " + shared.where() + "' watches)");
+                out.flush();
+            }
             live.start();
             if (recorder != null) {
                 out.println("recording: " + recorder.file());
@@ -138,6 +156,10 @@ public final class DemoCommand implements Callable<Integer> {
         } finally {
             if (recorder != null) {
                 recorder.close();
+            }
+            if (shared != null) {
+                shared.close();
+                faults.add(shared.summary());
             }
         }
         for (String f : faults) {

@@ -14,6 +14,7 @@ import java.util.concurrent.Callable;
 import java.util.concurrent.TimeUnit;
 
 import org.pointcall.ingest.pipeline.PacketPipeline;
+import org.pointcall.ingest.udp.DatagramHandler;
 import org.pointcall.ingest.udp.UdpSource;
 import org.pointcall.replay.record.Recorder;
 import org.pointcall.replay.record.RecorderPolicy;
@@ -37,6 +38,8 @@ import org.pointcall.shared.error.PointcallException;
 import org.pointcall.shared.outcome.PointsFile;
 import org.pointcall.shared.outcome.PointsFiles;
 import org.pointcall.shared.outcome.SessionEvent;
+import org.pointcall.ui.share.SessionShare;
+import org.pointcall.ui.share.ShareAddress;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -45,23 +48,35 @@ import picocli.CommandLine.Model.CommandSpec;
 
 /** The live pipeline without a screen: telemetry over UDP, one line per event, the points files at the end. */
 @Command(name = "monitor",
-        header = "Follow a test card live over UDP; --headless prints one line per event.",
+        header = "Follow a test card live over UDP (or watch a shared one); --headless prints one line per event.",
         mixinStandardHelpOptions = true,
         description = "Listens for pointcall wire-format telemetry, runs each stream through the live pipeline "
                 + "and the card session (detector, card matching, live bands, safety limits, analysis, verdicts) "
                 + "and prints one line per event: point begun, band status changed, point ended with its verdict, "
                 + "unplanned manoeuvre, limit alarm. With --out, writes points.json and points.csv when it stops "
-                + "(after --until-idle seconds without a datagram, or on Ctrl-C). The tool proposes; the team "
-                + "decides.%n")
+                + "(after --until-idle seconds without a datagram, or on Ctrl-C). With --share "
+                + "kafka://HOST:PORT/PREFIX it also publishes the session (every datagram, the dictionary, the card and every event) for "
+                + "consoles elsewhere to watch; with --watch instead of --listen it follows such a shared session, "
+                + "read-only, from its beginning. The tool proposes; the team decides.%n")
 public final class MonitorCommand implements Callable<Integer> {
 
     @Option(names = "--headless", description = "no console: events as lines on standard output")
     boolean headless;
 
-    @Option(names = "--listen", required = true, paramLabel = "udp://HOST:PORT", description = "where to listen")
+    @Option(names = "--listen", paramLabel = "udp://HOST:PORT", description = "where to listen")
     String listen;
 
-    @Option(names = "--card", required = true, paramLabel = "CARD", description = "test card")
+    @Option(names = "--watch", paramLabel = "kafka://HOST:PORT[/PREFIX]",
+            description = "instead of --listen: follow a session another monitor or console shares on Kafka "
+                    + "(read-only; card and dictionary come with it), or give a Kafka settings file")
+    String watch;
+
+    @Option(names = "--share", paramLabel = "kafka://HOST:PORT[/PREFIX]",
+            description = "also publish this session on Kafka for watching consoles (PREFIX.frames, .dictionary, "
+                    + ".events; default prefix pointcall), or give a Kafka settings file")
+    String share;
+
+    @Option(names = "--card", paramLabel = "CARD", description = "test card (with --listen)")
     Path cardFile;
 
     @Option(names = "--dictionary", paramLabel = "DICT",
@@ -101,6 +116,20 @@ public final class MonitorCommand implements Callable<Integer> {
         if (untilIdleS != null && !(untilIdleS > 0)) {
             throw new PointcallException("--until-idle must be a positive number of seconds, got " + untilIdleS);
         }
+        if ((listen == null) == (watch == null)) {
+            throw new PointcallException("give one of --listen udp://HOST:PORT (follow a stream here) or --watch "
+                    + "kafka://HOST:PORT/PREFIX (follow a session shared elsewhere)");
+        }
+        if (watch != null) {
+            if (share != null || cardFile != null) {
+                throw new PointcallException("--watch follows the card and session of the first console: "
+                        + (share != null ? "--share" : "--card") + " does not go with it");
+            }
+            return new WatchPrinter(ShareAddress.parse(watch, "--watch"), untilIdleS, out, w).run();
+        }
+        if (cardFile == null) {
+            throw new PointcallException("--listen needs --card CARD (the test card to follow)");
+        }
         InetSocketAddress bind = address(listen);
         ParameterDictionary checkDict = dictionaryFile == null ? DemoFiles.dictionary()
                 : DictionaryFiles.load(dictionaryFile);
@@ -108,8 +137,11 @@ public final class MonitorCommand implements Callable<Integer> {
         LoadedModel<Classifier> model = DetectorModel.load(modelFile);
         FaultLog faults = new FaultLog(line -> say(w, "fault: " + line), FaultLog.DEFAULT_MAX_LINES,
                 FaultLog.DEFAULT_WINDOW_NS);
+        SessionShare shared = share == null ? null : new SessionShare(ShareAddress.parse(share, "--share"),
+                readCard(cardFile), line -> say(w, line));
         Recorder recorder = noRecord ? null : Recorder.startIn(recordDir, RecorderPolicy.DEFAULT, System::nanoTime,
                 a -> say(w, "recorder: " + a));
+        Map<Integer, SessionShare.SharedStream> sharedStreams = new LinkedHashMap<>();
         StreamFrameSink sink = new StreamFrameSink() {
             @Override
             public void onFrame(int streamId, Frame frame, long receiveTimeNs) {
@@ -125,8 +157,14 @@ public final class MonitorCommand implements Callable<Integer> {
                 if (old != null) {
                     old.finish();
                 }
+                SessionShare.SharedStream oldShared = sharedStreams.remove(streamId);
+                if (oldShared != null) {
+                    oldShared.end();
+                }
                 try {
                     TestCard card = CardFiles.load(cardFile, dictionary);
+                    SessionShare.SharedStream ss = shared == null ? null
+                            : shared.begin(streamId, dictionary, "udp stream " + streamId + " on " + listen);
                     CardSession s = new CardSession(SessionSetup.of(dictionary, card, model.model(),
                             model.metadata().description(), CardAnalysers.standard()), e -> {
                                 say(w, line(e));
@@ -134,7 +172,14 @@ public final class MonitorCommand implements Callable<Integer> {
                                     recorder.appendRecord("session.event", e.timeNs(),
                                             PointsFiles.eventToJson(e).getBytes(StandardCharsets.UTF_8));
                                 }
+                                if (ss != null) {
+                                    ss.onEvent(e);
+                                }
                             });
+                    if (ss != null) {
+                        ss.follow(s::snapshot);
+                        sharedStreams.put(streamId, ss);
+                    }
                     sessions.put(streamId, s);
                     say(w, "stream " + streamId + ": dictionary '" + dictionary.name() + "', card " + card.sortie()
                             + " (" + card.points().size() + " points)");
@@ -148,14 +193,17 @@ public final class MonitorCommand implements Callable<Integer> {
         UdpSource udp;
         try {
             udp = new UdpSource(new UdpSourceConfig(bind, UdpSourceConfig.DEFAULT_RECEIVE_BUFFER_BYTES, java.util.Set.of(), true),
-                    recorder == null ? pipeline : recorder.tee(pipeline), faults, System::nanoTime);
+                    teed(recorder, shared, pipeline), faults, System::nanoTime);
         } catch (RuntimeException e) {
             throw new PointcallException("cannot listen on " + listen + ": " + e.getMessage(), e);
         }
         if (recorder != null) {
             say(w, "recording: " + recorder.file());
         }
-        Thread stopper = new Thread(() -> stop(udp, pipeline, recorder, w), "monitor-stop");
+        if (shared != null) {
+            say(w, "sharing on " + shared.where() + " for watching consoles");
+        }
+        Thread stopper = new Thread(() -> stop(udp, pipeline, recorder, shared, w), "monitor-stop");
         Runtime.getRuntime().addShutdownHook(stopper);
         pipeline.start();
         udp.start();
@@ -175,14 +223,29 @@ public final class MonitorCommand implements Callable<Integer> {
             }
         }
         Runtime.getRuntime().removeShutdownHook(stopper);
-        stop(udp, pipeline, recorder, w);
+        stop(udp, pipeline, recorder, shared, w);
         return 0;
+    }
+
+    private static DatagramHandler teed(Recorder recorder, SessionShare shared, PacketPipeline pipeline) {
+        DatagramHandler h = recorder == null ? pipeline : recorder.tee(pipeline);
+        return shared == null ? h : shared.tee(h);
+    }
+
+    /** The card file's text, as shared with watchers (the same bytes the session loaded). */
+    static String readCard(Path card) {
+        try {
+            return java.nio.file.Files.readString(card, StandardCharsets.UTF_8);
+        } catch (java.io.IOException e) {
+            throw new PointcallException(card + ": cannot read (" + e.getMessage() + ")", e);
+        }
     }
 
     private boolean stopped;
 
     /** Stops the receiver, drains the pipeline, finishes every session and writes the points files. */
-    private synchronized void stop(UdpSource udp, PacketPipeline pipeline, Recorder recorder, PrintWriter w) {
+    private synchronized void stop(UdpSource udp, PacketPipeline pipeline, Recorder recorder, SessionShare shared,
+                                   PrintWriter w) {
         if (stopped) {
             return;
         }
@@ -198,6 +261,10 @@ public final class MonitorCommand implements Callable<Integer> {
         if (recorder != null) {
             recorder.close();
             say(w, "recorded: " + recorder.file());
+        }
+        if (shared != null) {
+            shared.close();
+            say(w, shared.summary());
         }
         say(w, "stopped: " + udp.datagrams() + " datagrams, " + sessions.values().stream()
                 .mapToLong(CardSession::frames).sum() + " frames");

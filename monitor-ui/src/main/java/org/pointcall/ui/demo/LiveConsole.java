@@ -13,6 +13,7 @@ import org.pointcall.shared.dictionary.ParameterDictionary;
 import org.pointcall.ui.desk.DeskLink;
 import org.pointcall.ui.settings.ConsoleSettings;
 import org.pointcall.ui.trace.TraceFeed;
+import org.pointcall.ui.share.SessionShare;
 import org.pointcall.ui.trace.TraceTap;
 
 /**
@@ -37,6 +38,9 @@ public final class LiveConsole implements AutoCloseable {
     private final DeskPublisher publisher;
     private final SessionDesk desk;
     private volatile CardSession session;
+    private volatile SessionShare share;
+    private volatile String shareSource = "";
+    private SessionShare.SharedStream shared;
 
     /**
      * @param dictionary the expected stream dictionary (the charted parameters are checked against it)
@@ -70,7 +74,20 @@ public final class LiveConsole implements AutoCloseable {
             if (old != null) {
                 old.finish();
             }
-            CardSession s = sessions.create(d, desk);
+            SessionShare sh = share;
+            if (shared != null) {
+                shared.end();
+                shared = null;
+            }
+            SessionShare.SharedStream ss = sh == null ? null : sh.begin(id, d, shareSource + " stream " + id);
+            CardSession s = sessions.create(d, ss == null ? desk : e -> {
+                desk.onEvent(e);
+                ss.onEvent(e);
+            });
+            if (ss != null) {
+                ss.follow(s::snapshot);
+                shared = ss;
+            }
             desk.bind(s);
             session = s;
             FrameSink[] after = {s::onFrame, clock, tap};
@@ -95,6 +112,17 @@ public final class LiveConsole implements AutoCloseable {
         }
         return new TraceTap(dictionary, charted.isEmpty() ? List.of(dictionary.parameters().get(0).name()) : charted,
                 RING_SAMPLES);
+    }
+
+    /**
+     * Shares every session of this console on Kafka (its events, card and live view); give the same share's
+     * {@link SessionShare#tee} as the tee so the datagrams go too. Call before {@link #start}.
+     *
+     * @param source where the telemetry comes from, in words
+     */
+    public void share(SessionShare s, String source) {
+        this.shareSource = source;
+        this.share = s;
     }
 
     public void start() {

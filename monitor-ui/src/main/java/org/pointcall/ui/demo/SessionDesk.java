@@ -47,7 +47,7 @@ public final class SessionDesk implements DeskModel, SessionListener {
 
     private final TestCard card;
     private final ParameterDictionary dictionary;
-    private CardSession session;
+    private SessionSide session;
     private final List<LogEntry> events = new ArrayList<>();
     private final List<PointSpan> spans = new ArrayList<>();
     private final List<AlarmLine> alarms = new ArrayList<>();
@@ -56,6 +56,18 @@ public final class SessionDesk implements DeskModel, SessionListener {
     private VerdictCard verdict;
     private long nextAlarmId = 1;
     private volatile TransportSide transport;
+
+    /**
+     * What the desk reads of a session and hands the engineer's commands to: a {@link CardSession} run here, or a
+     * session watched from elsewhere (which refuses commands).
+     */
+    public interface SessionSide {
+        SessionSnapshot snapshot();
+
+        void arm(String cardId);
+
+        void call(String cardId, Verdict call, String note);
+    }
 
     /** What a replay adds: its transport, read and steered. */
     public interface TransportSide {
@@ -71,6 +83,26 @@ public final class SessionDesk implements DeskModel, SessionListener {
 
     /** Binds the session (created with this object as its listener). */
     public synchronized void bind(CardSession s) {
+        this.session = s == null ? null : new SessionSide() {
+            @Override
+            public SessionSnapshot snapshot() {
+                return s.snapshot();
+            }
+
+            @Override
+            public void arm(String cardId) {
+                s.arm(cardId);
+            }
+
+            @Override
+            public void call(String cardId, Verdict call, String note) {
+                s.call(cardId, call, note);
+            }
+        };
+    }
+
+    /** Binds a session this desk only reads (a watched one). */
+    public synchronized void bind(SessionSide s) {
         this.session = s;
     }
 
@@ -78,7 +110,7 @@ public final class SessionDesk implements DeskModel, SessionListener {
         this.transport = t;
     }
 
-    private synchronized CardSession session() {
+    private synchronized SessionSide session() {
         return session;
     }
 
@@ -198,7 +230,7 @@ public final class SessionDesk implements DeskModel, SessionListener {
 
     @Override
     public List<CardRow> card() {
-        CardSession s = session();
+        SessionSide s = session();
         List<CardRow> rows = new ArrayList<>();
         if (s == null) {
             for (TestPoint p : card.points()) {
@@ -229,7 +261,7 @@ public final class SessionDesk implements DeskModel, SessionListener {
 
     @Override
     public ActivePoint active() {
-        CardSession s = session();
+        SessionSide s = session();
         if (s == null) {
             return null;
         }
@@ -317,7 +349,7 @@ public final class SessionDesk implements DeskModel, SessionListener {
 
     @Override
     public void accept(DeskCommand c) {
-        CardSession s = session();
+        SessionSide s = session();
         try {
             if (c instanceof DeskCommand.Arm a) {
                 requireSession(s).arm(a.pointId());
@@ -341,7 +373,7 @@ public final class SessionDesk implements DeskModel, SessionListener {
         }
     }
 
-    private static CardSession requireSession(CardSession s) {
+    private static SessionSide requireSession(SessionSide s) {
         if (s == null) {
             throw new IllegalStateException("no stream yet: the card session starts with the first frames");
         }
@@ -370,7 +402,7 @@ public final class SessionDesk implements DeskModel, SessionListener {
     }
 
     private double lastTimeS() {
-        CardSession s = session;
+        SessionSide s = session;
         return s == null ? (events.isEmpty() ? 0 : events.get(events.size() - 1).timeS()) : s.snapshot().timeNs() / 1e9;
     }
 }

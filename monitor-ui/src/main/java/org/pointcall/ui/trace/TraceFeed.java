@@ -21,7 +21,7 @@ public final class TraceFeed {
     record Layout(int number, List<String> parameters, List<String> units, int[] slots) {
     }
 
-    private final ParameterDictionary dictionary;
+    private volatile ParameterDictionary dictionary;
     private final SampleRing ring;
     private volatile Layout layout;
 
@@ -35,6 +35,11 @@ public final class TraceFeed {
     }
 
     private Layout layout(int number, List<String> parameters) {
+        return layout(number, parameters, true);
+    }
+
+    /** @param strict refuse a parameter the dictionary lacks; else chart it as an empty lane (NaN) */
+    private Layout layout(int number, List<String> parameters, boolean strict) {
         List<String> problems = new ArrayList<>();
         if (parameters.size() > MAX_LANES) {
             problems.add(parameters.size() + " parameters: at most " + MAX_LANES + " can be charted at once");
@@ -45,7 +50,9 @@ public final class TraceFeed {
         for (int i = 0; i < parameters.size() && i < MAX_LANES; i++) {
             String p = parameters.get(i);
             int slot = dictionary.indexOf(p);
-            if (slot < 0) {
+            if (slot < 0 && !strict) {
+                units.add("");
+            } else if (slot < 0) {
                 problems.add("'" + p + "' is not a parameter of the dictionary '" + dictionary.name() + "'"
                         + sameIgnoringCase(p));
                 units.add("");
@@ -73,10 +80,20 @@ public final class TraceFeed {
      * Charts {@code parameters} from now on (JavaFX thread); returns the new layout's number. Refuses, naming
      * each, parameters the dictionary lacks, and more than {@link #MAX_LANES}; the layout then stays as it was.
      */
-    public int select(List<String> parameters) {
+    public synchronized int select(List<String> parameters) {
         Layout l = layout(layout.number() + 1, parameters);
         layout = l;
         return l.number();
+    }
+
+    /**
+     * The stream now follows {@code d} (a watched session's new dictionary): the charted names are looked up in it
+     * again, a name it lacks becomes an empty lane. Call on the writer's thread before its first frame of {@code d}.
+     */
+    public synchronized void rebind(ParameterDictionary d) {
+        dictionary = Objects.requireNonNull(d, "dictionary");
+        Layout now = layout;
+        layout = layout(now.number(), now.parameters(), false);
     }
 
     Layout layout() {

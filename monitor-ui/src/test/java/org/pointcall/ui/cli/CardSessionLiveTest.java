@@ -40,7 +40,7 @@ import org.pointcall.shared.outcome.Verdict;
  * no stall, and a 3.5 g limit the 4 g loop breaks.
  */
 class CardSessionLiveTest {
-    private static final ParameterDictionary DICT = DemoFiles.dictionary();
+    static final ParameterDictionary DICT = DemoFiles.dictionary();
     private static final String LOOP_BANDS = String.join("\n",
             "    bands:",
             "      - {parameter: KCAS, phase: entry, target: 320, tol: 10, unit: kt}",
@@ -50,7 +50,7 @@ class CardSessionLiveTest {
             "sortie: T-9", "airframe: veskarn-02", "points:",
             "  - {id: SL-1, kind: stall-level, title: Stall}",
             "  - id: LP-1", "    kind: loop", "    title: Loop", LOOP_BANDS), "flown.yaml", DICT);
-    private static final TestCard SESSION = CardFiles.parse(String.join("\n",
+    static final TestCard SESSION = CardFiles.parse(String.join("\n",
             "sortie: T-9", "airframe: veskarn-02", "limits:", "  - {parameter: Nz, max: 3.5, unit: g}", "points:",
             "  - id: LP-A", "    kind: loop", "    title: First loop", LOOP_BANDS,
             "  - id: LP-B", "    kind: loop", "    title: Second loop", LOOP_BANDS), "session.yaml", DICT);
