@@ -61,7 +61,8 @@ public final class BenchCommand implements Runnable {
         public void run() {
             if (!org.pointcall.ui.console.ConsoleApp.displayAvailable()) {
                 throw new org.pointcall.shared.error.PointcallException(
-                        "bench console needs a display: DISPLAY is not set (start Xvfb, or run it on a desktop)");
+                        "bench console needs a window: " + org.pointcall.ui.console.ConsoleApp.windowProblem()
+                                + " (start Xvfb, or run it on a desktop)");
             }
             if (!(seconds >= 1) || !(warm >= 0)) {
                 throw new IllegalArgumentException("--seconds must be >= 1 and --warm >= 0");

@@ -116,7 +116,7 @@ public final class ConsoleCommand implements Callable<Integer> {
             throw new PointcallException("--backfill must be 0 or more seconds, got " + backfillS);
         }
         if (!ConsoleApp.displayAvailable()) {
-            throw new PointcallException("no display (DISPLAY is not set): the console needs one; 'monitor "
+            throw new PointcallException(ConsoleApp.windowProblem() + ": the console needs a window; 'monitor "
                     + "--headless' follows a stream without it" + (source.watch == null ? ""
                     : " ('monitor --headless --watch " + source.watch + "' watches this session)"));
         }

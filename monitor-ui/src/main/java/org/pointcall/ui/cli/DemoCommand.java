@@ -100,7 +100,7 @@ public final class DemoCommand implements Callable<Integer> {
         PrintWriter err = spec.commandLine().getErr();
         boolean window = !headless && ConsoleApp.displayAvailable();
         if (!headless && !window) {
-            err.println("demo: no display (DISPLAY is not set): running the headless monitor instead");
+            err.println("demo: " + ConsoleApp.windowProblem() + ": running the headless monitor instead");
             err.flush();
         }
         Path settingsPath = settingsFile != null ? settingsFile : SettingsFile.defaultPath();

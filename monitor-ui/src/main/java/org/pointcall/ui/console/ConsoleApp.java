@@ -47,8 +47,47 @@ public final class ConsoleApp extends Application {
         }
     }
 
-    /** True when a window can be opened here (a display, and JavaFX's GTK library loads). */
+    /** True when a window can be opened here (a display, and on Linux the GTK 3 library JavaFX needs). */
     public static boolean displayAvailable() {
+        return windowProblem() == null;
+    }
+
+    /**
+     * Why no window can be opened here, in words for a user, or null when one can: no display, or (Linux, BSD)
+     * no GTK 3, which JavaFX's windowing needs and a server or container install often lacks.
+     */
+    public static String windowProblem() {
+        if (!hasDisplay()) {
+            return "no display (DISPLAY is not set)";
+        }
+        String os = System.getProperty("os.name", "").toLowerCase(java.util.Locale.ROOT);
+        if ((os.contains("linux") || os.contains("bsd")) && !hasGtk3()) {
+            return "a display is set but the GTK 3 library is missing (JavaFX needs it; on Debian or Ubuntu: "
+                    + "apt-get install libgtk-3-0)";
+        }
+        return null;
+    }
+
+    private static boolean hasGtk3() {
+        String[] dirs = {"/usr/lib/x86_64-linux-gnu", "/usr/lib/aarch64-linux-gnu", "/usr/lib64", "/usr/lib",
+            "/lib/x86_64-linux-gnu", "/lib64", "/usr/local/lib"};
+        for (String d : dirs) {
+            if (java.nio.file.Files.exists(java.nio.file.Path.of(d, "libgtk-3.so.0"))) {
+                return true;
+            }
+        }
+        String ld = System.getenv("LD_LIBRARY_PATH");
+        if (ld != null) {
+            for (String d : ld.split(":")) {
+                if (!d.isBlank() && java.nio.file.Files.exists(java.nio.file.Path.of(d, "libgtk-3.so.0"))) {
+                    return true;
+                }
+            }
+        }
+        return false;
+    }
+
+    private static boolean hasDisplay() {
         String os = System.getProperty("os.name", "").toLowerCase(java.util.Locale.ROOT);
         if (os.contains("linux") || os.contains("bsd")) {
             String d = System.getenv("DISPLAY");
