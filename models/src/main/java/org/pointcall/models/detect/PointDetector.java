@@ -52,6 +52,17 @@ public final class PointDetector implements Detector {
     private int historyNext;
     private int historySize;
     private final PhysicalState replay = new PhysicalState();
+    /** The recent states at 20 Hz for the boundary rules, and their work. */
+    private final PhysicsHistory physics = new PhysicsHistory();
+    private final BoundaryRefiner refiner;
+    private final boolean[] departs;
+    private final boolean[] recovers;
+    private final boolean[] accelerates;
+    private final long[] gapNs;
+    private final long recoveryWaitNs;
+    private final long accelWaitNs;
+    /** Checks for the physical end while a point waits for it, at most this often. */
+    private static final long END_CHECK_NS = 250_000_000L;
 
     private final long maxRefineNs;
     private final long mergeGapNs;
@@ -65,6 +76,12 @@ public final class PointDetector implements Detector {
     private long lastEndNs = NONE;
 
     private int phase = IDLE;
+    /** The open point has left and waits for its physical end (boundary rules). */
+    private boolean waiting;
+    private long lastEndCheckNs;
+    private long physicalEndNs;
+    /** The open point's begin as the classifier placed it, where the boundary rules look from. */
+    private long classifierBeginNs;
     private int pointClass = -1;
     private long pointId;
     private long beginNs;
@@ -131,6 +148,27 @@ public final class PointDetector implements Detector {
         this.maxTickGapNs = Math.round(settings.maxTickGapS() * 1e9);
         this.edgeProbability = settings.edgeProbability();
         this.switchMargin = settings.switchMargin();
+        this.refiner = new BoundaryRefiner(physics, settings.boundaries());
+        this.departs = new boolean[n];
+        this.recovers = new boolean[n];
+        this.accelerates = new boolean[n];
+        this.gapNs = new long[n];
+        long fragmentNs = Math.round(settings.boundaries().fragmentGapS() * 1e9);
+        for (int c = 0; c < n; c++) {
+            ManoeuvreKind k = classes.kind(c);
+            gapNs[c] = mergeGapNs;
+            if (k == null) {
+                continue;
+            }
+            departs[c] = BoundaryRules.applies(BoundaryRules.BEGIN_DEPARTURE, k, settings);
+            recovers[c] = BoundaryRules.applies(BoundaryRules.END_RECOVERY, k, settings);
+            accelerates[c] = BoundaryRules.applies(BoundaryRules.ACCEL_EXTENT, k, settings);
+            if (BoundaryRules.applies(BoundaryRules.FRAGMENT_MERGE, k, settings)) {
+                gapNs[c] = Math.max(mergeGapNs, fragmentNs);
+            }
+        }
+        this.recoveryWaitNs = Math.round(settings.boundaries().recoveryWaitS() * 1e9);
+        this.accelWaitNs = Math.round(settings.boundaries().accelWaitS() * 1e9);
         resetRun(NONE);
     }
 
@@ -151,8 +189,10 @@ public final class PointDetector implements Detector {
         lastFrameNs = NONE;
         lastEndNs = NONE;
         phase = IDLE;
+        waiting = false;
         pointClass = -1;
         pointId = 0;
+        physics.clear();
         featureCount = 0;
         switchNote = null;
         smoother.reset();
@@ -176,6 +216,7 @@ public final class PointDetector implements Detector {
         }
         lastFrameNs = t;
         binder.fill(frame, state);
+        physics.add(state);
         historyNs[historyNext] = t;
         state.copyTo(historyValues, historySampledNs, historyNext * PhysicalQuantity.COUNT);
         historyNext = (historyNext + 1) % HISTORY_FRAMES;
@@ -313,11 +354,14 @@ public final class PointDetector implements Detector {
             endEstimateNs = fallEstimate(k);
         }
         if (channel[k].isOn()) {
-            if (channel[k].edgeNs() - leaveNs <= mergeGapNs) {
+            if (channel[k].edgeNs() - leaveNs <= gapNs[k] || waiting) {
+                // back within the gap, or while the point still waited for its physical end: the same point
                 phase = ACTIVE;
+                waiting = false;
+                physicalEndNs = NONE;
                 merges++;
             } else {
-                close(now, endEstimateNs, null);
+                close(now, endEstimateNs, null, NONE);
                 begin(k, now, top);
             }
             return;
@@ -328,15 +372,40 @@ public final class PointDetector implements Detector {
         }
         int j = strongestOn(k);
         if (j >= 0) {
-            close(now, endEstimateNs, null);
+            close(now, endEstimateNs, null, riseEstimate(j));
             begin(j, now, top);
             return;
         }
         long rising = channel[k].pendingNs();
-        boolean riseInGap = rising != NONE && rising - leaveNs <= mergeGapNs;
-        if (now - leaveNs > mergeGapNs && !riseInGap) {
-            close(now, endEstimateNs, null);
+        boolean riseInGap = rising != NONE && rising - leaveNs <= gapNs[k];
+        if (now - leaveNs > gapNs[k] && !riseInGap) {
+            if (!physicalEndKnown(k, now)) {
+                waiting = true;
+                return;
+            }
+            close(now, endEstimateNs, null, NONE);
         }
+    }
+
+    /**
+     * For a kind whose end a boundary rule places: true once that end has been seen (kept in physicalEndNs), or the
+     * wait for it is over; true at once for other kinds. Checked at most every {@link #END_CHECK_NS}.
+     */
+    private boolean physicalEndKnown(int k, long now) {
+        if (!recovers[k] && !accelerates[k]) {
+            return true;
+        }
+        long wait = accelerates[k] ? accelWaitNs : recoveryWaitNs;
+        if (now - endEstimateNs > wait) {
+            return true;
+        }
+        if (waiting && now - lastEndCheckNs < END_CHECK_NS) {
+            return false;
+        }
+        lastEndCheckNs = now;
+        physicalEndNs = accelerates[k] ? refiner.accelEnd(beginNs, now)
+                : refiner.recoveryEnd(classes.kind(k), beginNs, now);
+        return physicalEndNs != NONE;
     }
 
     /** The class with its channel on and the highest smoothed probability, other than {@code except}; or -1. */
@@ -375,11 +444,22 @@ public final class PointDetector implements Detector {
         if (lastEndNs != NONE) {
             b = Math.max(b, lastEndNs);
         }
+        classifierBeginNs = b;
+        String moved = null;
+        long physical = departs[c] ? refiner.departureBegin(b, lastEndNs, now)
+                : accelerates[c] ? refiner.accelBegin(b, lastEndNs) : NONE;
+        if (physical != NONE && physical <= now) {
+            moved = "begin at " + (departs[c] ? BoundaryRules.BEGIN_DEPARTURE : BoundaryRules.ACCEL_EXTENT) + " "
+                    + seconds(physical) + " s, the classifier's " + seconds(b) + " s";
+            b = physical;
+        }
         if (candidateNs[c] == NONE) {
             restart(c, b);
         }
         pointId++;
         phase = ACTIVE;
+        waiting = false;
+        physicalEndNs = NONE;
         pointClass = c;
         beginNs = b;
         begunAtNs = now;
@@ -396,6 +476,9 @@ public final class PointDetector implements Detector {
         addFeatures(ev);
         ev.add("entered: smoothed p(" + classes.name(c) + ") above " + settings.enterProbability() + " for "
                 + settings.enterS() + " s from " + seconds(channel[c].edgeNs()) + " s");
+        if (moved != null) {
+            ev.add(moved);
+        }
         emit(PointEvent.Type.BEGUN, now, NONE, List.of(), ev, liveConfidence(c));
     }
 
@@ -421,7 +504,7 @@ public final class PointDetector implements Detector {
         long jBegin = riseEstimate(j);
         long f = edge[k].fallNs();
         long end = f != NONE && f >= beginNs ? Math.min(f, jBegin) : jBegin;
-        close(now, Math.max(end, beginNs), "ended when " + to.key() + " took over");
+        close(now, Math.max(end, beginNs), "ended when " + to.key() + " took over", jBegin);
         begin(j, now, top);
     }
 
@@ -455,12 +538,17 @@ public final class PointDetector implements Detector {
         emit(PointEvent.Type.REFINED, now, NONE, keys, ev, liveConfidence(pointClass));
     }
 
-    /** Ends the open point at {@code endNs}, judges it and says ENDED or DISCARDED. */
-    private void close(long now, long endNs, String note) {
+    /**
+     * Ends the open point at {@code endNs} (or where a boundary rule places it, not after {@code capNs} unless that
+     * is NONE), judges it and says ENDED or DISCARDED.
+     */
+    private void close(long now, long endNs, String note, long capNs) {
         int k = pointClass;
         ManoeuvreKind kind = classes.kind(k);
         long end = Math.max(endNs, beginNs);
         List<String> ev = new ArrayList<>();
+        refineBoundaries(k, kind, now, end, capNs, ev);
+        end = Math.max(refinedEndNs, beginNs);
         addFeatures(ev);
         if (switchNote != null) {
             ev.add(switchNote);
@@ -529,14 +617,56 @@ public final class PointDetector implements Detector {
         restart(k, candidateNs[k]);
     }
 
+    private long refinedEndNs;
+
+    /**
+     * The boundary rules: the end where the physics says the point was over (found while waiting, or now), the begin
+     * where the aircraft departed its steady entry; sets refinedEndNs and moves beginNs, with evidence.
+     */
+    private void refineBoundaries(int k, ManoeuvreKind kind, long now, long end, long capNs, List<String> ev) {
+        refinedEndNs = end;
+        if (recovers[k] || accelerates[k]) {
+            String rule = accelerates[k] ? BoundaryRules.ACCEL_EXTENT : BoundaryRules.END_RECOVERY;
+            long e = physicalEndNs;
+            if (e == NONE) {
+                e = accelerates[k] ? refiner.accelEnd(beginNs, now) : refiner.recoveryEnd(kind, beginNs, now);
+            }
+            if (e != NONE && capNs != NONE) {
+                e = Math.min(e, capNs);
+            }
+            if (e != NONE && e > beginNs) {
+                ev.add("end moved to " + rule + " at " + seconds(e) + " s from " + seconds(end) + " s");
+                if (e > end) {
+                    // the rules judge everything seen up to the physical end, not only the classifier's stretch
+                    for (GuardRule r : rules[k]) {
+                        r.mark();
+                    }
+                }
+                refinedEndNs = e;
+            } else {
+                ev.add("kept end: " + rule + " found no physical end");
+            }
+        }
+        if (departs[k] || accelerates[k]) {
+            String rule = departs[k] ? BoundaryRules.BEGIN_DEPARTURE : BoundaryRules.ACCEL_EXTENT;
+            long b = departs[k] ? refiner.departureBegin(classifierBeginNs, lastEndNs, now)
+                    : refiner.accelBegin(classifierBeginNs, lastEndNs);
+            if (b != NONE && b != beginNs && b < refinedEndNs && (lastEndNs == NONE || b >= lastEndNs)) {
+                ev.add("begin moved to " + rule + " at " + seconds(b) + " s from " + seconds(beginNs) + " s");
+                beginNs = b;
+            }
+        }
+        waiting = false;
+    }
+
     @Override
     public void finish(long timeNs) {
         long now = lastTickNs == NONE ? timeNs : Math.max(timeNs, lastTickNs);
         if (phase == ACTIVE) {
             long f = edge[pointClass].fallNs();
-            close(now, f != NONE && f >= beginNs ? f : now, "ended by finish");
+            close(now, f != NONE && f >= beginNs ? f : now, "ended by finish", NONE);
         } else if (phase == CLOSING) {
-            close(now, endEstimateNs, "ended by finish");
+            close(now, endEstimateNs, "ended by finish", NONE);
         }
         resetRun(NONE);
         floorNs = now;

@@ -18,6 +18,7 @@ import org.pointcall.ingest.window.FeatureExtractor;
 import org.pointcall.models.data.DatasetBuilder;
 import org.pointcall.models.data.LabelledRows;
 import org.pointcall.models.detect.ClassLayout;
+import org.pointcall.models.detect.DetectorListener;
 import org.pointcall.models.detect.DetectorSettings;
 import org.pointcall.models.detect.PointDetector;
 import org.pointcall.models.detect.PointEvent;
@@ -46,6 +47,7 @@ public final class StreamingScorer {
     private final ModelDescription model;
     private final ParameterDictionary dictionary;
     private final DetectorSettings detectorSettings;
+    private DetectorListener watcher;
 
     /**
      * @throws PointcallException when the dictionary lacks a parameter the model needs, carries one in a unit of
@@ -69,6 +71,15 @@ public final class StreamingScorer {
                         + "; converting features is not supported here");
             }
         }
+    }
+
+    /**
+     * Also gives every detector event (BEGUN, REFINED, ENDED, DISCARDED) to {@code listener}, on the scoring thread,
+     * for a closer look at how points were decided; null for none.
+     */
+    public StreamingScorer watchEvents(DetectorListener listener) {
+        this.watcher = listener;
+        return this;
     }
 
     /** A simulated sortie's folder: {@code sortie.csv} labelled by {@code truth.json}. */
@@ -174,6 +185,9 @@ public final class StreamingScorer {
         }
 
         void onEvent(PointEvent e) {
+            if (watcher != null) {
+                watcher.onPointEvent(e);
+            }
             switch (e.type()) {
                 // begunAtNs is the BEGUN event's reportedAtNs: the live report of the point
                 case ENDED -> detected.add(new DetectedPoint(e.kind(), Units.nsToSeconds(e.beginNs()),

@@ -1,0 +1,387 @@
+package org.pointcall.models.detect;
+
+import org.pointcall.shared.kind.ManoeuvreKind;
+
+/**
+ * The {@link BoundaryRules boundary rules}' work: a point's begin and end placed on the {@link PhysicsHistory},
+ * once the classifier has found the point. Work arrays are allocated once; a call costs O(samples of the window).
+ *
+ * <ul>
+ * <li>{@code begin-departure}: a departure measure per sample, the largest of |dCAS/dt| (least-squares slope over
+ * 2 s), |Nz cos(bank) - 1| (off the level or steady-turn value), |AoS|, |Q| and |P| (means over half a second), each
+ * over its threshold. The onset is a sample where the measure reaches 1 after a quiet stretch below 1 and stays at 1
+ * or more for a while; of those near the classifier's begin, the one nearest to it; it is then moved back to where
+ * the measure last was below a half, the foot of the rise (the threshold crossing lags the input).</li>
+ * <li>{@code end-recovery}: after the manoeuvre's core (the AoA maximum of a stall, the last highest third of the
+ * roll rate of a roll, of the load factor of a wind-up turn, of |AoS| of a sideslip), the first stretch of steady
+ * flight ({@link BoundarySettings}) as long as the dwell; the end is the end of that stretch.</li>
+ * <li>{@code accel-extent}: the begin goes back over every sample still gaining speed; the end is the highest CAS
+ * (mean over 2 s) before it has dropped by {@link BoundarySettings#accelDropMps()}.</li>
+ * </ul>
+ */
+final class BoundaryRefiner {
+    private static final long NONE = PointEvent.UNKNOWN_NS;
+    /** AoA fall after its peak that shows a stall's break is behind, rad. */
+    private static final double BREAK_FALL_RAD = Math.toRadians(2);
+    /** The foot of a departure is looked for at most this far before its threshold crossing, s. */
+    private static final double FOOT_S = 2.0;
+
+    private static final boolean DEBUG = Boolean.getBoolean("pointcall.debug");
+    private final PhysicsHistory h;
+    private final BoundarySettings s;
+    private final double[] ts = new double[PhysicsHistory.CAPACITY];
+    private final double[] cas = new double[PhysicsHistory.CAPACITY];
+    private final double[] casMean = new double[PhysicsHistory.CAPACITY];
+    private final double[] casRate = new double[PhysicsHistory.CAPACITY];
+    private final double[] pMean = new double[PhysicsHistory.CAPACITY];
+    private final double[] qMean = new double[PhysicsHistory.CAPACITY];
+    private final double[] dep = new double[PhysicsHistory.CAPACITY];
+    private final double[] p1 = new double[PhysicsHistory.CAPACITY + 1];
+    private final double[] p2 = new double[PhysicsHistory.CAPACITY + 1];
+    private final double[] p3 = new double[PhysicsHistory.CAPACITY + 1];
+    private final double[] p4 = new double[PhysicsHistory.CAPACITY + 1];
+    private final double[] p5 = new double[PhysicsHistory.CAPACITY + 1];
+    private int from;
+    private int to;
+
+    BoundaryRefiner(PhysicsHistory history, BoundarySettings settings) {
+        this.h = history;
+        this.s = settings;
+    }
+
+    /** Fills the derived signals over the kept states [i0, i1). */
+    private void prepare(int i0, int i1) {
+        from = i0;
+        to = i1;
+        if (i1 <= i0) {
+            return;
+        }
+        long origin = h.timeNs(i0);
+        for (int i = i0; i < i1; i++) {
+            ts[i] = (h.timeNs(i) - origin) * 1e-9;
+            cas[i] = h.value(i, PhysicalQuantity.CAS);
+        }
+        // prefix sums over finite CAS: count, t, t^2, v, t v
+        p1[i0] = p2[i0] = p3[i0] = p4[i0] = p5[i0] = 0;
+        for (int i = i0; i < i1; i++) {
+            double v = cas[i];
+            boolean ok = Double.isFinite(v);
+            p1[i + 1] = p1[i] + (ok ? 1 : 0);
+            p2[i + 1] = p2[i] + (ok ? ts[i] : 0);
+            p3[i + 1] = p3[i] + (ok ? ts[i] * ts[i] : 0);
+            p4[i + 1] = p4[i] + (ok ? v : 0);
+            p5[i + 1] = p5[i] + (ok ? ts[i] * v : 0);
+        }
+        int lo = i0;
+        int hi = i0;
+        for (int i = i0; i < i1; i++) {
+            while (ts[lo] < ts[i] - 1.0) {
+                lo++;
+            }
+            while (hi < i1 && ts[hi] <= ts[i] + 1.0) {
+                hi++;
+            }
+            double n = p1[hi] - p1[lo];
+            double st = p2[hi] - p2[lo];
+            double stt = p3[hi] - p3[lo];
+            double sv = p4[hi] - p4[lo];
+            double stv = p5[hi] - p5[lo];
+            double den = n * stt - st * st;
+            casMean[i] = n > 0 ? sv / n : Double.NaN;
+            casRate[i] = n >= 3 && den > 1e-12 ? (n * stv - st * sv) / den : Double.NaN;
+        }
+        mean(PhysicalQuantity.P, pMean, 0.25);
+        mean(PhysicalQuantity.Q, qMean, 0.25);
+        for (int i = i0; i < i1; i++) {
+            dep[i] = departure(i);
+        }
+    }
+
+    /** Mean of {@code q} over +-{@code halfS} around each sample of the prepared range. */
+    private void mean(PhysicalQuantity q, double[] out, double halfS) {
+        p1[from] = p2[from] = 0;
+        for (int i = from; i < to; i++) {
+            double v = h.value(i, q);
+            boolean ok = Double.isFinite(v);
+            p1[i + 1] = p1[i] + (ok ? 1 : 0);
+            p2[i + 1] = p2[i] + (ok ? v : 0);
+        }
+        int lo = from;
+        int hi = from;
+        for (int i = from; i < to; i++) {
+            while (ts[lo] < ts[i] - halfS) {
+                lo++;
+            }
+            while (hi < to && ts[hi] <= ts[i] + halfS) {
+                hi++;
+            }
+            double n = p1[hi] - p1[lo];
+            out[i] = n > 0 ? (p2[hi] - p2[lo]) / n : Double.NaN;
+        }
+    }
+
+    private double departure(int i) {
+        double d = 0;
+        d = term(d, casRate[i], s.departureSpeedRateMps2());
+        double nz = h.value(i, PhysicalQuantity.NZ);
+        double bank = h.value(i, PhysicalQuantity.ROLL);
+        if (Double.isFinite(nz)) {
+            double c = Double.isFinite(bank) ? Math.cos(bank) : 1.0;
+            d = term(d, nz * c - 1.0, s.departureNz());
+        }
+        d = term(d, h.value(i, PhysicalQuantity.AOS), s.departureBetaRad());
+        d = term(d, qMean[i], s.departurePitchRateRadS());
+        d = term(d, pMean[i], s.departureRollRateRadS());
+        return d;
+    }
+
+    private static double term(double d, double x, double limit) {
+        return Double.isFinite(x) ? Math.max(d, Math.abs(x) / limit) : d;
+    }
+
+    /** Steady flight at kept state {@code i}: rates, bank and flight-path angle small (NaN quantities skipped). */
+    private boolean steady(int i) {
+        double p = h.value(i, PhysicalQuantity.P);
+        double q = h.value(i, PhysicalQuantity.Q);
+        double bank = h.value(i, PhysicalQuantity.ROLL);
+        double pitch = h.value(i, PhysicalQuantity.PITCH);
+        double aoa = h.value(i, PhysicalQuantity.AOA);
+        if (Double.isFinite(p) && Math.abs(p) >= s.steadyRollRateRadS()) {
+            return false;
+        }
+        if (Double.isFinite(q) && Math.abs(q) >= s.steadyPitchRateRadS()) {
+            return false;
+        }
+        if (Double.isFinite(bank) && Math.abs(bank) >= s.steadyBankRad()) {
+            return false;
+        }
+        if (Double.isFinite(pitch) && Double.isFinite(aoa)) {
+            double gamma = pitch - aoa * (Double.isFinite(bank) ? Math.cos(bank) : 1.0);
+            return Math.abs(gamma) < s.steadyGammaRad();
+        }
+        return true;
+    }
+
+    /**
+     * {@code begin-departure}: where the aircraft left its steady entry, near {@code beginNs}, not before
+     * {@code floorNs} (the previous kept point's end, or NONE) nor after {@code nowNs}; NONE when no onset is seen.
+     */
+    long departureBegin(long beginNs, long floorNs, long nowNs) {
+        long lookNs = Math.round(s.departureLookS() * 1e9);
+        long quietNs = Math.round(s.departureQuietS() * 1e9);
+        long activeNs = Math.round(s.departureActiveS() * 1e9);
+        long a = beginNs - lookNs - quietNs;
+        if (floorNs != NONE) {
+            a = Math.max(a, floorNs);
+        }
+        long b = Math.min(nowNs, beginNs + lookNs + activeNs);
+        int i0 = h.indexAtOrAfter(a);
+        int i1 = h.indexAtOrAfter(b + 1);
+        if (i1 - i0 < 4) {
+            return NONE;
+        }
+        prepare(Math.max(0, i0 - 25), Math.min(h.size(), i1 + 25));
+        double quietS = s.departureQuietS();
+        double activeS = s.departureActiveS();
+        int best = -1;
+        long bestDist = Long.MAX_VALUE;
+        int quietFrom = -1;
+        for (int j = i0; j < i1; j++) {
+            if (dep[j] < 1.0) {
+                if (quietFrom < 0) {
+                    quietFrom = j;
+                }
+                continue;
+            }
+            boolean quietBefore = quietFrom >= 0 && ts[j] - ts[quietFrom] >= quietS;
+            quietFrom = -1;
+            if (!quietBefore) {
+                continue;
+            }
+            int k = j;
+            while (k < i1 && dep[k] >= 1.0 && ts[k] - ts[j] < activeS) {
+                k++;
+            }
+            if (k >= i1 || ts[k] - ts[j] < activeS) {
+                continue;
+            }
+            long dist = Math.abs(h.timeNs(j) - beginNs);
+            if (DEBUG) {
+                System.out.println("      cand " + h.timeNs(j) / 1e9 + " begin " + beginNs / 1e9 + " now " + nowNs / 1e9
+                        + " rate " + casRate[j] + " nz " + h.value(j, PhysicalQuantity.NZ) + " aos "
+                        + h.value(j, PhysicalQuantity.AOS) + " q " + qMean[j] + " p " + pMean[j]);
+            }
+            if (dist < bestDist) {
+                bestDist = dist;
+                best = j;
+            }
+        }
+        if (best < 0) {
+            return NONE;
+        }
+        int foot = best;
+        while (foot - 1 >= i0 && dep[foot - 1] >= 0.5 && ts[best] - ts[foot - 1] <= FOOT_S) {
+            foot--;
+        }
+        return h.timeNs(foot);
+    }
+
+    /**
+     * {@code end-recovery}: the end of the first steady stretch after the core of a {@code kind} point begun at
+     * {@code beginNs}, seen by {@code nowNs}; NONE when there is none yet.
+     */
+    long recoveryEnd(ManoeuvreKind kind, long beginNs, long nowNs) {
+        int i0 = h.indexAtOrAfter(beginNs);
+        int i1 = h.indexAtOrAfter(nowNs + 1);
+        if (i1 - i0 < 4) {
+            return NONE;
+        }
+        prepare(i0, i1);
+        int core = core(kind, i0, i1);
+        if (core < 0) {
+            return NONE;
+        }
+        int start = -1;
+        for (int i = core; i < i1; i++) {
+            if (!steady(i)) {
+                start = -1;
+                continue;
+            }
+            if (start < 0) {
+                start = i;
+            }
+            if (ts[i] - ts[start] >= s.steadyDwellS()) {
+                return h.timeNs(i);
+            }
+        }
+        return NONE;
+    }
+
+    /** The last sample of the manoeuvre's core in [i0, i1), or -1. */
+    private int core(ManoeuvreKind kind, int i0, int i1) {
+        switch (kind) {
+            case STALL_LEVEL:
+            case STALL_TURN: {
+                int at = -1;
+                double best = Double.NEGATIVE_INFINITY;
+                for (int i = i0; i < i1; i++) {
+                    double a = h.value(i, PhysicalQuantity.AOA);
+                    if (Double.isFinite(a) && a > best) {
+                        best = a;
+                        at = i;
+                    }
+                }
+                // the break must be behind us: AoA down from its peak by 2 deg (the stall rule's noise floor)
+                for (int i = at + 1; at >= 0 && i < i1; i++) {
+                    double a = h.value(i, PhysicalQuantity.AOA);
+                    if (Double.isFinite(a) && a <= best - BREAK_FALL_RAD) {
+                        return at;
+                    }
+                }
+                return -1;
+            }
+            case AILERON_ROLL:
+                return lastAbove(i0, i1, pMean, 0.0, 2.0 / 3.0);
+            case SIDESLIP:
+                return lastAbove(i0, i1, null, 0.0, 2.0 / 3.0);
+            case WIND_UP_TURN:
+                return lastAboveNz(i0, i1);
+            default:
+                return -1;
+        }
+    }
+
+    /** Last sample whose |x| (AoS when {@code x} is null) is at least {@code fraction} of its largest. */
+    private int lastAbove(int i0, int i1, double[] x, double base, double fraction) {
+        double peak = 0;
+        for (int i = i0; i < i1; i++) {
+            double v = x == null ? h.value(i, PhysicalQuantity.AOS) : x[i];
+            if (Double.isFinite(v)) {
+                peak = Math.max(peak, Math.abs(v - base));
+            }
+        }
+        if (peak == 0) {
+            return -1;
+        }
+        for (int i = i1 - 1; i >= i0; i--) {
+            double v = x == null ? h.value(i, PhysicalQuantity.AOS) : x[i];
+            if (Double.isFinite(v) && Math.abs(v - base) >= fraction * peak) {
+                return i;
+            }
+        }
+        return -1;
+    }
+
+    private int lastAboveNz(int i0, int i1) {
+        double peak = Double.NEGATIVE_INFINITY;
+        for (int i = i0; i < i1; i++) {
+            double v = h.value(i, PhysicalQuantity.NZ);
+            if (Double.isFinite(v)) {
+                peak = Math.max(peak, v);
+            }
+        }
+        if (!(peak > 1.0)) {
+            return -1;
+        }
+        double level = 1.0 + (peak - 1.0) * 2.0 / 3.0;
+        for (int i = i1 - 1; i >= i0; i--) {
+            double v = h.value(i, PhysicalQuantity.NZ);
+            if (Double.isFinite(v) && v >= level) {
+                return i;
+            }
+        }
+        return -1;
+    }
+
+    /** {@code accel-extent}: the first sample of the run of speed gain that holds {@code beginNs}; NONE if none. */
+    long accelBegin(long beginNs, long floorNs) {
+        long a = beginNs - Math.round(s.accelLookBackS() * 1e9);
+        if (floorNs != NONE) {
+            a = Math.max(a, floorNs);
+        }
+        int i0 = h.indexAtOrAfter(a);
+        int ib = h.indexAtOrAfter(beginNs);
+        int i1 = Math.min(h.size(), ib + 40);
+        if (ib >= h.size() || ib - i0 < 2) {
+            return NONE;
+        }
+        prepare(i0, i1);
+        int i = ib;
+        if (!(casRate[i] > s.accelRateMps2())) {
+            return NONE;
+        }
+        while (i - 1 >= i0 && casRate[i - 1] > s.accelRateMps2()) {
+            i--;
+        }
+        return h.timeNs(i);
+    }
+
+    /**
+     * {@code accel-extent}: the time of the highest CAS (mean over 2 s) from {@code beginNs} up to where it has
+     * dropped by the settings' drop below it, seen by {@code nowNs}; NONE while it has not dropped.
+     */
+    long accelEnd(long beginNs, long nowNs) {
+        int i0 = h.indexAtOrAfter(beginNs);
+        int i1 = h.indexAtOrAfter(nowNs + 1);
+        if (i1 - i0 < 4) {
+            return NONE;
+        }
+        prepare(i0, i1);
+        double best = Double.NEGATIVE_INFINITY;
+        int at = -1;
+        // the mean over 2 s is complete 1 s before now
+        for (int i = i0; i < i1 && ts[i] <= ts[i1 - 1] - 1.0; i++) {
+            double v = casMean[i];
+            if (!Double.isFinite(v)) {
+                continue;
+            }
+            if (v > best) {
+                best = v;
+                at = i;
+            } else if (v < best - s.accelDropMps()) {
+                return h.timeNs(at);
+            }
+        }
+        return NONE;
+    }
+}

@@ -1,0 +1,54 @@
+package org.pointcall.models.detect;
+
+import java.util.List;
+
+import org.pointcall.shared.kind.ManoeuvreKind;
+
+/**
+ * The named boundary rules: once the classifier has found a point, these place its begin and end from the physics,
+ * where the smoothed class probability is seconds off. Each is switched off by naming it in
+ * {@link DetectorSettings#disabledRules()}, like a guard rule. See {@link BoundaryRefiner} for how each works.
+ */
+public final class BoundaryRules {
+    /** The begin goes back (or forward) to where the aircraft left its steady entry: the first input's onset. */
+    public static final String BEGIN_DEPARTURE = "begin-departure";
+    /** The end goes to where the aircraft is back in steady level flight after the manoeuvre's core. */
+    public static final String END_RECOVERY = "end-recovery";
+    /** A level acceleration spans the whole stretch of gaining speed, up to the highest speed before it is lost. */
+    public static final String ACCEL_EXTENT = "accel-extent";
+    /** Long points (level acceleration, phugoid, stabilised) bridge longer gaps of their own kind. */
+    public static final String FRAGMENT_MERGE = "fragment-merge";
+
+    /** Every boundary rule name, in documentation order. */
+    public static final List<String> NAMES = List.of(BEGIN_DEPARTURE, END_RECOVERY, ACCEL_EXTENT, FRAGMENT_MERGE);
+
+    private BoundaryRules() {
+    }
+
+    /** Names of the boundary rules that apply to {@code kind}. */
+    public static List<String> namesFor(ManoeuvreKind kind) {
+        switch (kind) {
+            case STALL_LEVEL:
+            case STALL_TURN:
+            case WIND_UP_TURN:
+            case AILERON_ROLL:
+            case SIDESLIP:
+                return List.of(BEGIN_DEPARTURE, END_RECOVERY);
+            case LOOP:
+                return List.of(BEGIN_DEPARTURE);
+            case PHUGOID:
+                return List.of(BEGIN_DEPARTURE, FRAGMENT_MERGE);
+            case LEVEL_ACCEL:
+                return List.of(ACCEL_EXTENT, FRAGMENT_MERGE);
+            case STABILISED:
+                return List.of(FRAGMENT_MERGE);
+            default:
+                return List.of();
+        }
+    }
+
+    /** True when {@code name} applies to {@code kind} and is not switched off in {@code settings}. */
+    public static boolean applies(String name, ManoeuvreKind kind, DetectorSettings settings) {
+        return settings.ruleEnabled(name) && namesFor(kind).contains(name);
+    }
+}
