@@ -120,23 +120,51 @@ final class BoundaryRefiner {
         }
     }
 
+    /** Number of departure terms: speed rate, Nz, AoS, Q, P. */
+    private static final int TERMS = 5;
+
     private double departure(int i) {
         double d = 0;
-        d = term(d, casRate[i], s.departureSpeedRateMps2());
-        double nz = h.value(i, PhysicalQuantity.NZ);
-        double bank = h.value(i, PhysicalQuantity.ROLL);
-        if (Double.isFinite(nz)) {
-            double c = Double.isFinite(bank) ? Math.cos(bank) : 1.0;
-            d = term(d, nz * c - 1.0, s.departureNz());
+        for (int c = 0; c < TERMS; c++) {
+            double x = term(i, c);
+            if (Double.isFinite(x)) {
+                d = Math.max(d, x);
+            }
         }
-        d = term(d, h.value(i, PhysicalQuantity.AOS), s.departureBetaRad());
-        d = term(d, qMean[i], s.departurePitchRateRadS());
-        d = term(d, pMean[i], s.departureRollRateRadS());
         return d;
     }
 
-    private static double term(double d, double x, double limit) {
-        return Double.isFinite(x) ? Math.max(d, Math.abs(x) / limit) : d;
+    /** The largest term at sample {@code i}. */
+    private int strongestTerm(int i) {
+        int best = 0;
+        double bestX = Double.NEGATIVE_INFINITY;
+        for (int c = 0; c < TERMS; c++) {
+            double x = term(i, c);
+            if (Double.isFinite(x) && x > bestX) {
+                bestX = x;
+                best = c;
+            }
+        }
+        return best;
+    }
+
+    /** Departure term {@code c} at sample {@code i}, over its threshold; NaN without data. */
+    private double term(int i, int c) {
+        switch (c) {
+            case 0:
+                return Math.abs(casRate[i]) / s.departureSpeedRateMps2();
+            case 1: {
+                double nz = h.value(i, PhysicalQuantity.NZ);
+                double bank = h.value(i, PhysicalQuantity.ROLL);
+                return Math.abs(nz * (Double.isFinite(bank) ? Math.cos(bank) : 1.0) - 1.0) / s.departureNz();
+            }
+            case 2:
+                return Math.abs(h.value(i, PhysicalQuantity.AOS)) / s.departureBetaRad();
+            case 3:
+                return Math.abs(qMean[i]) / s.departurePitchRateRadS();
+            default:
+                return Math.abs(pMean[i]) / s.departureRollRateRadS();
+        }
     }
 
     /** Steady flight at kept state {@code i}: rates, bank and flight-path angle small (NaN quantities skipped). */
@@ -219,8 +247,10 @@ final class BoundaryRefiner {
         if (best < 0) {
             return NONE;
         }
+        // the foot of the rise of the term that departed first (others may sit below their thresholds anyway)
+        int c = strongestTerm(best);
         int foot = best;
-        while (foot - 1 >= i0 && dep[foot - 1] >= 0.5 && ts[best] - ts[foot - 1] <= FOOT_S) {
+        while (foot - 1 >= i0 && term(foot - 1, c) >= 0.5 && ts[best] - ts[foot - 1] <= FOOT_S) {
             foot--;
         }
         return h.timeNs(foot);
@@ -354,6 +384,25 @@ final class BoundaryRefiner {
             i--;
         }
         return h.timeNs(i);
+    }
+
+    /** Relative CAS gain from {@code beginNs} to {@code endNs} (means over 2 s); NaN without CAS. */
+    double speedGain(long beginNs, long endNs) {
+        int i0 = h.indexAtOrAfter(beginNs);
+        int i1 = h.indexAtOrAfter(endNs + 1);
+        if (i1 - i0 < 2) {
+            return Double.NaN;
+        }
+        prepare(i0, i1);
+        double lo = Double.NaN;
+        double hi = Double.NaN;
+        for (int i = i0; i < i1; i++) {
+            if (Double.isFinite(casMean[i])) {
+                lo = Double.isNaN(lo) ? casMean[i] : Math.min(lo, casMean[i]);
+                hi = Double.isNaN(hi) ? casMean[i] : Math.max(hi, casMean[i]);
+            }
+        }
+        return lo > 0 ? (hi - lo) / lo : Double.NaN;
     }
 
     /**

@@ -16,11 +16,14 @@ public final class BoundaryRules {
     public static final String END_RECOVERY = "end-recovery";
     /** A level acceleration spans the whole stretch of gaining speed, up to the highest speed before it is lost. */
     public static final String ACCEL_EXTENT = "accel-extent";
+    /** A level acceleration must gain a good share of its entry speed: the whole point is judged on it. */
+    public static final String ACCEL_GAIN = "accel-gain";
     /** Long points (level acceleration, phugoid, stabilised) bridge longer gaps of their own kind. */
     public static final String FRAGMENT_MERGE = "fragment-merge";
 
     /** Every boundary rule name, in documentation order. */
-    public static final List<String> NAMES = List.of(BEGIN_DEPARTURE, END_RECOVERY, ACCEL_EXTENT, FRAGMENT_MERGE);
+    public static final List<String> NAMES = List.of(BEGIN_DEPARTURE, END_RECOVERY, ACCEL_EXTENT, ACCEL_GAIN,
+            FRAGMENT_MERGE);
 
     private BoundaryRules() {
     }
@@ -39,7 +42,7 @@ public final class BoundaryRules {
             case PHUGOID:
                 return List.of(BEGIN_DEPARTURE, FRAGMENT_MERGE);
             case LEVEL_ACCEL:
-                return List.of(ACCEL_EXTENT, FRAGMENT_MERGE);
+                return List.of(ACCEL_EXTENT, ACCEL_GAIN, FRAGMENT_MERGE);
             case STABILISED:
                 return List.of(FRAGMENT_MERGE);
             default:

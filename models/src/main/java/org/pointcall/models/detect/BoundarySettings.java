@@ -29,25 +29,27 @@ import org.pointcall.shared.error.PointcallException;
  * @param accelDropMps         {@code accel-extent}: the run has ended once CAS is this far below its highest
  * @param accelWaitS           {@code accel-extent}: longest wait after the classifier's end for that drop
  * @param fragmentGapS         {@code fragment-merge}: gap a long point of one kind bridges
+ * @param accelGain            {@code accel-gain}: least CAS gain of a level acceleration, a fraction of its lowest
  */
 public record BoundarySettings(double steadyRollRateRadS, double steadyPitchRateRadS, double steadyBankRad,
                                double steadyGammaRad, double steadyDwellS, double recoveryWaitS,
                                double departureLookS, double departureQuietS, double departureActiveS,
                                double departureSpeedRateMps2, double departureNz, double departureBetaRad,
                                double departurePitchRateRadS, double departureRollRateRadS, double accelRateMps2,
-                               double accelLookBackS, double accelDropMps, double accelWaitS, double fragmentGapS) {
+                               double accelLookBackS, double accelDropMps, double accelWaitS, double fragmentGapS,
+                               double accelGain) {
 
     public BoundarySettings {
         List<String> bad = new ArrayList<>();
         double[] all = {steadyRollRateRadS, steadyPitchRateRadS, steadyBankRad, steadyGammaRad, steadyDwellS,
                 recoveryWaitS, departureLookS, departureQuietS, departureActiveS, departureSpeedRateMps2, departureNz,
                 departureBetaRad, departurePitchRateRadS, departureRollRateRadS, accelRateMps2, accelLookBackS,
-                accelDropMps, accelWaitS, fragmentGapS};
+                accelDropMps, accelWaitS, fragmentGapS, accelGain};
         String[] names = {"steadyRollRateRadS", "steadyPitchRateRadS", "steadyBankRad", "steadyGammaRad",
                 "steadyDwellS", "recoveryWaitS", "departureLookS", "departureQuietS", "departureActiveS",
                 "departureSpeedRateMps2", "departureNz", "departureBetaRad", "departurePitchRateRadS",
                 "departureRollRateRadS", "accelRateMps2", "accelLookBackS", "accelDropMps", "accelWaitS",
-                "fragmentGapS"};
+                "fragmentGapS", "accelGain"};
         for (int i = 0; i < all.length; i++) {
             if (!(all[i] > 0) || Double.isInfinite(all[i])) {
                 bad.add(names[i] + " must be a finite number above 0, got " + all[i]);
@@ -67,26 +69,34 @@ public record BoundarySettings(double steadyRollRateRadS, double steadyPitchRate
      * for it. Departure looked for 10 s either side, after 1 s quiet and followed by 1 s active, beyond 0.15 m/s2
      * (0.3 kt/s) of speed rate, 0.1 g of Nz, 1.5 deg of AoS, 2 deg/s of Q or 5 deg/s of P. Level acceleration gaining
      * above 0.05 m/s2, looked for up to 120 s back, ended 0.5 m/s (1 kt) below the highest CAS, waited up to 60 s.
-     * Long points bridge 8 s gaps.
+     * Long points bridge 8 s gaps. A level acceleration gains at least 5 % of its lowest CAS (its purpose is a
+     * sweep of speed; the demo card's runs gain over 15 %).
      */
     public static BoundarySettings defaults() {
         double deg = Math.PI / 180;
         return new BoundarySettings(3 * deg, 1.5 * deg, 4 * deg, 1.5 * deg, 2.0, 30.0,
                 10.0, 1.0, 1.0, 0.15, 0.1, 1.5 * deg, 2 * deg, 5 * deg,
-                0.05, 120.0, 0.5, 60.0, 8.0);
+                0.05, 120.0, 0.5, 60.0, 8.0, 0.05);
     }
 
     public BoundarySettings withSteadyDwellS(double v) {
         return new BoundarySettings(steadyRollRateRadS, steadyPitchRateRadS, steadyBankRad, steadyGammaRad, v,
                 recoveryWaitS, departureLookS, departureQuietS, departureActiveS, departureSpeedRateMps2, departureNz,
                 departureBetaRad, departurePitchRateRadS, departureRollRateRadS, accelRateMps2, accelLookBackS,
-                accelDropMps, accelWaitS, fragmentGapS);
+                accelDropMps, accelWaitS, fragmentGapS, accelGain);
+    }
+
+    public BoundarySettings withAccelGain(double v) {
+        return new BoundarySettings(steadyRollRateRadS, steadyPitchRateRadS, steadyBankRad, steadyGammaRad,
+                steadyDwellS, recoveryWaitS, departureLookS, departureQuietS, departureActiveS,
+                departureSpeedRateMps2, departureNz, departureBetaRad, departurePitchRateRadS, departureRollRateRadS,
+                accelRateMps2, accelLookBackS, accelDropMps, accelWaitS, fragmentGapS, v);
     }
 
     public BoundarySettings withFragmentGapS(double v) {
         return new BoundarySettings(steadyRollRateRadS, steadyPitchRateRadS, steadyBankRad, steadyGammaRad,
                 steadyDwellS, recoveryWaitS, departureLookS, departureQuietS, departureActiveS,
                 departureSpeedRateMps2, departureNz, departureBetaRad, departurePitchRateRadS, departureRollRateRadS,
-                accelRateMps2, accelLookBackS, accelDropMps, accelWaitS, v);
+                accelRateMps2, accelLookBackS, accelDropMps, accelWaitS, v, accelGain);
     }
 }

@@ -58,6 +58,7 @@ public final class PointDetector implements Detector {
     private final boolean[] departs;
     private final boolean[] recovers;
     private final boolean[] accelerates;
+    private final boolean[] gains;
     private final long[] gapNs;
     private final long recoveryWaitNs;
     private final long accelWaitNs;
@@ -152,6 +153,7 @@ public final class PointDetector implements Detector {
         this.departs = new boolean[n];
         this.recovers = new boolean[n];
         this.accelerates = new boolean[n];
+        this.gains = new boolean[n];
         this.gapNs = new long[n];
         long fragmentNs = Math.round(settings.boundaries().fragmentGapS() * 1e9);
         for (int c = 0; c < n; c++) {
@@ -163,6 +165,7 @@ public final class PointDetector implements Detector {
             departs[c] = BoundaryRules.applies(BoundaryRules.BEGIN_DEPARTURE, k, settings);
             recovers[c] = BoundaryRules.applies(BoundaryRules.END_RECOVERY, k, settings);
             accelerates[c] = BoundaryRules.applies(BoundaryRules.ACCEL_EXTENT, k, settings);
+            gains[c] = BoundaryRules.applies(BoundaryRules.ACCEL_GAIN, k, settings);
             if (BoundaryRules.applies(BoundaryRules.FRAGMENT_MERGE, k, settings)) {
                 gapNs[c] = Math.max(mergeGapNs, fragmentNs);
             }
@@ -568,6 +571,20 @@ public final class PointDetector implements Detector {
             }
         }
         boolean ok = true;
+        if (gains[k]) {
+            double gain = refiner.speedGain(beginNs, end);
+            String line = BoundaryRules.ACCEL_GAIN + ": CAS gained " + String.format(Locale.ROOT, "%.1f", 100 * gain)
+                    + " % (needs " + String.format(Locale.ROOT, "%.1f", 100 * settings.boundaries().accelGain())
+                    + " %)";
+            if (Double.isNaN(gain)) {
+                ev.add("unchecked " + BoundaryRules.ACCEL_GAIN + ": no CAS");
+            } else if (gain < settings.boundaries().accelGain()) {
+                ok = false;
+                ev.add("failed " + line);
+            } else {
+                ev.add("passed " + line);
+            }
+        }
         double durationS = (end - beginNs) / 1e9;
         double minS = settings.minDurationS(kind);
         String duration = "min-duration: " + String.format(Locale.ROOT, "%.2f s (needs %.2f s)", durationS, minS);
