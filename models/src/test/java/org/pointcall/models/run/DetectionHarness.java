@@ -61,6 +61,26 @@ public final class DetectionHarness {
             results.add(r);
             System.out.println("== " + dir.getFileName() + " (" + r.detected().size() + " kept, " + r.discarded()
                     + " discarded)");
+            String range = System.getProperty("ticks", "");
+            if (!range.isBlank()) {
+                double a = Double.parseDouble(range.split(",")[0]);
+                double b = Double.parseDouble(range.split(",")[1]);
+                StringBuilder sb = new StringBuilder("    ticks:");
+                int last = -1;
+                for (int i = 0; i < r.ticks(); i++) {
+                    double ts = r.spanBeginS() + i * 0.05;
+                    if (ts < a || ts > b) {
+                        continue;
+                    }
+                    int c = r.predictedClass()[i];
+                    if (c != last) {
+                        sb.append(String.format(Locale.ROOT, " %.1f:%s", ts,
+                                org.pointcall.models.data.LabelledRows.CLASS_NAMES.get(c)));
+                        last = c;
+                    }
+                }
+                System.out.println(sb);
+            }
             boolean[] used = new boolean[r.detected().size()];
             for (TruePoint t : r.truth()) {
                 int best = -1;
