@@ -18,12 +18,17 @@ public final class BoundaryRules {
     public static final String ACCEL_EXTENT = "accel-extent";
     /** A level acceleration must gain a good share of its entry speed: the whole point is judged on it. */
     public static final String ACCEL_GAIN = "accel-gain";
+    /**
+     * A kind enters at a lower smoothed probability when every one of its rules that can judge live has already
+     * passed (a doublet's two reversals, a roll's full turn): the physics vouches for a classifier that is unsure.
+     */
+    public static final String PHYSICS_ENTRY = "physics-entry";
     /** Long points (level acceleration, phugoid, stabilised) bridge longer gaps of their own kind. */
     public static final String FRAGMENT_MERGE = "fragment-merge";
 
     /** Every boundary rule name, in documentation order. */
     public static final List<String> NAMES = List.of(BEGIN_DEPARTURE, END_RECOVERY, ACCEL_EXTENT, ACCEL_GAIN,
-            FRAGMENT_MERGE);
+            FRAGMENT_MERGE, PHYSICS_ENTRY);
 
     private BoundaryRules() {
     }
@@ -33,12 +38,16 @@ public final class BoundaryRules {
         switch (kind) {
             case STALL_LEVEL:
             case STALL_TURN:
+                // an AoA peak with a fall is common outside stalls: too weak to vouch for an entry
+                return List.of(BEGIN_DEPARTURE, END_RECOVERY);
             case WIND_UP_TURN:
             case AILERON_ROLL:
             case SIDESLIP:
-                return List.of(BEGIN_DEPARTURE, END_RECOVERY);
+                return List.of(BEGIN_DEPARTURE, END_RECOVERY, PHYSICS_ENTRY);
             case LOOP:
-                return List.of(BEGIN_DEPARTURE);
+                return List.of(BEGIN_DEPARTURE, PHYSICS_ENTRY);
+            case PITCH_DOUBLET:
+                return List.of(PHYSICS_ENTRY);
             case PHUGOID:
                 return List.of(BEGIN_DEPARTURE, FRAGMENT_MERGE);
             case LEVEL_ACCEL:

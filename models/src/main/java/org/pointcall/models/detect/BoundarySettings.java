@@ -30,6 +30,8 @@ import org.pointcall.shared.error.PointcallException;
  * @param accelWaitS           {@code accel-extent}: longest wait after the classifier's end for that drop
  * @param fragmentGapS         {@code fragment-merge}: gap a long point of one kind bridges
  * @param accelGain            {@code accel-gain}: least CAS gain of a level acceleration, a fraction of its lowest
+ * @param assistEnterProbability {@code physics-entry}: a kind whose live rules passed enters above this...
+ * @param assistLeaveProbability ...and such a point leaves below this
  */
 public record BoundarySettings(double steadyRollRateRadS, double steadyPitchRateRadS, double steadyBankRad,
                                double steadyGammaRad, double steadyDwellS, double recoveryWaitS,
@@ -37,19 +39,19 @@ public record BoundarySettings(double steadyRollRateRadS, double steadyPitchRate
                                double departureSpeedRateMps2, double departureNz, double departureBetaRad,
                                double departurePitchRateRadS, double departureRollRateRadS, double accelRateMps2,
                                double accelLookBackS, double accelDropMps, double accelWaitS, double fragmentGapS,
-                               double accelGain) {
+                               double accelGain, double assistEnterProbability, double assistLeaveProbability) {
 
     public BoundarySettings {
         List<String> bad = new ArrayList<>();
         double[] all = {steadyRollRateRadS, steadyPitchRateRadS, steadyBankRad, steadyGammaRad, steadyDwellS,
                 recoveryWaitS, departureLookS, departureQuietS, departureActiveS, departureSpeedRateMps2, departureNz,
                 departureBetaRad, departurePitchRateRadS, departureRollRateRadS, accelRateMps2, accelLookBackS,
-                accelDropMps, accelWaitS, fragmentGapS, accelGain};
+                accelDropMps, accelWaitS, fragmentGapS, accelGain, assistEnterProbability, assistLeaveProbability};
         String[] names = {"steadyRollRateRadS", "steadyPitchRateRadS", "steadyBankRad", "steadyGammaRad",
                 "steadyDwellS", "recoveryWaitS", "departureLookS", "departureQuietS", "departureActiveS",
                 "departureSpeedRateMps2", "departureNz", "departureBetaRad", "departurePitchRateRadS",
                 "departureRollRateRadS", "accelRateMps2", "accelLookBackS", "accelDropMps", "accelWaitS",
-                "fragmentGapS", "accelGain"};
+                "fragmentGapS", "accelGain", "assistEnterProbability", "assistLeaveProbability"};
         for (int i = 0; i < all.length; i++) {
             if (!(all[i] > 0) || Double.isInfinite(all[i])) {
                 bad.add(names[i] + " must be a finite number above 0, got " + all[i]);
@@ -58,6 +60,10 @@ public record BoundarySettings(double steadyRollRateRadS, double steadyPitchRate
         if (accelLookBackS > PhysicsHistory.CAPACITY * PhysicsHistory.STEP_NS / 1e9) {
             bad.add("accelLookBackS must not exceed the detector's physics history of "
                     + PhysicsHistory.CAPACITY * PhysicsHistory.STEP_NS / 1e9 + " s, got " + accelLookBackS);
+        }
+        if (!(assistLeaveProbability < assistEnterProbability && assistEnterProbability < 1)) {
+            bad.add("assistLeaveProbability (" + assistLeaveProbability + ") must be below assistEnterProbability ("
+                    + assistEnterProbability + "), which must be below 1");
         }
         if (!bad.isEmpty()) {
             throw new PointcallException("boundary settings: " + String.join("; ", bad));
@@ -70,33 +76,37 @@ public record BoundarySettings(double steadyRollRateRadS, double steadyPitchRate
      * (0.3 kt/s) of speed rate, 0.1 g of Nz, 1.5 deg of AoS, 2 deg/s of Q or 5 deg/s of P. Level acceleration gaining
      * above 0.05 m/s2, looked for up to 120 s back, ended 0.5 m/s (1 kt) below the highest CAS, waited up to 60 s.
      * Long points bridge 8 s gaps. A level acceleration gains at least 5 % of its lowest CAS (its purpose is a
-     * sweep of speed; the demo card's runs gain over 15 %).
+     * sweep of speed; the demo card's runs gain over 15 %). A kind whose live rules passed enters above 0.35 and
+     * leaves below 0.2.
      */
     public static BoundarySettings defaults() {
         double deg = Math.PI / 180;
         return new BoundarySettings(3 * deg, 1.5 * deg, 4 * deg, 1.5 * deg, 2.0, 30.0,
                 10.0, 1.0, 1.0, 0.15, 0.1, 1.5 * deg, 2 * deg, 5 * deg,
-                0.05, 120.0, 0.5, 60.0, 8.0, 0.05);
+                0.05, 120.0, 0.5, 60.0, 8.0, 0.05, 0.35, 0.2);
     }
 
     public BoundarySettings withSteadyDwellS(double v) {
         return new BoundarySettings(steadyRollRateRadS, steadyPitchRateRadS, steadyBankRad, steadyGammaRad, v,
                 recoveryWaitS, departureLookS, departureQuietS, departureActiveS, departureSpeedRateMps2, departureNz,
                 departureBetaRad, departurePitchRateRadS, departureRollRateRadS, accelRateMps2, accelLookBackS,
-                accelDropMps, accelWaitS, fragmentGapS, accelGain);
+                accelDropMps, accelWaitS, fragmentGapS, accelGain,
+                assistEnterProbability, assistLeaveProbability);
     }
 
     public BoundarySettings withAccelGain(double v) {
         return new BoundarySettings(steadyRollRateRadS, steadyPitchRateRadS, steadyBankRad, steadyGammaRad,
                 steadyDwellS, recoveryWaitS, departureLookS, departureQuietS, departureActiveS,
                 departureSpeedRateMps2, departureNz, departureBetaRad, departurePitchRateRadS, departureRollRateRadS,
-                accelRateMps2, accelLookBackS, accelDropMps, accelWaitS, fragmentGapS, v);
+                accelRateMps2, accelLookBackS, accelDropMps, accelWaitS, fragmentGapS, v, assistEnterProbability,
+                assistLeaveProbability);
     }
 
     public BoundarySettings withFragmentGapS(double v) {
         return new BoundarySettings(steadyRollRateRadS, steadyPitchRateRadS, steadyBankRad, steadyGammaRad,
                 steadyDwellS, recoveryWaitS, departureLookS, departureQuietS, departureActiveS,
                 departureSpeedRateMps2, departureNz, departureBetaRad, departurePitchRateRadS, departureRollRateRadS,
-                accelRateMps2, accelLookBackS, accelDropMps, accelWaitS, v, accelGain);
+                accelRateMps2, accelLookBackS, accelDropMps, accelWaitS, v, accelGain, assistEnterProbability,
+                assistLeaveProbability);
     }
 }

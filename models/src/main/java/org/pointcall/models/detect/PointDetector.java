@@ -36,6 +36,10 @@ public final class PointDetector implements Detector {
     private final int[] kindClasses;
     private final Hysteresis[] channel;
     private final Hysteresis[] edge;
+    /** Per kind, the lower entry of {@code physics-entry}: enough when the kind's live rules have passed. */
+    private final Hysteresis[] assist;
+    private final boolean[] assisted;
+    private boolean pointAssisted;
     private final GuardRule[][] rules;
     private final long[] candidateNs;
     private final double[] confSum;
@@ -117,6 +121,8 @@ public final class PointDetector implements Detector {
         this.smoothed = new double[n];
         this.channel = new Hysteresis[n];
         this.edge = new Hysteresis[n];
+        this.assist = new Hysteresis[n];
+        this.assisted = new boolean[n];
         this.rules = new GuardRule[n][];
         this.candidateNs = new long[n];
         this.confSum = new double[n];
@@ -143,6 +149,10 @@ public final class PointDetector implements Detector {
             edge[c] = new Hysteresis(settings.edgeProbability(), settings.edgeDebounceS(),
                     settings.edgeProbability(), settings.edgeDebounceS());
             rules[c] = GuardRules.forKind(k, settings);
+            BoundarySettings bs = settings.boundaries();
+            assist[c] = new Hysteresis(bs.assistEnterProbability(), settings.enterS(), bs.assistLeaveProbability(),
+                    settings.leaveS());
+            assisted[c] = BoundaryRules.applies(BoundaryRules.PHYSICS_ENTRY, k, settings);
         }
         this.maxRefineNs = Math.round(settings.maxRefineS() * 1e9);
         this.mergeGapNs = Math.round(settings.mergeGapS() * 1e9);
@@ -204,6 +214,7 @@ public final class PointDetector implements Detector {
         historySize = 0;
         for (int c : kindClasses) {
             channel[c].reset();
+            assist[c].reset();
             edge[c].reset();
             candidateNs[c] = NONE;
             restart(c, NONE);
@@ -265,6 +276,7 @@ public final class PointDetector implements Detector {
         smoother.smooth(timeNs, p, smoothed);
         for (int c : kindClasses) {
             channel[c].update(timeNs, smoothed[c]);
+            assist[c].update(timeNs, smoothed[c]);
             edge[c].update(timeNs, p[c]);
             boolean owned = phase != IDLE && c == pointClass;
             if (!owned) {
@@ -328,6 +340,7 @@ public final class PointDetector implements Detector {
         for (int c : kindClasses) {
             if (phase == IDLE || c != pointClass) {
                 channel[c].reset();
+                assist[c].reset();
                 edge[c].reset();
             }
         }
@@ -343,7 +356,7 @@ public final class PointDetector implements Detector {
         }
         int k = pointClass;
         if (phase == ACTIVE) {
-            if (channel[k].isOn()) {
+            if (gate(k).isOn()) {
                 int j = strongestOn(k);
                 if (j >= 0 && smoothed[j] > smoothed[k] + switchMargin) {
                     takeOver(k, j, now, top);
@@ -353,11 +366,11 @@ public final class PointDetector implements Detector {
                 return;
             }
             phase = CLOSING;
-            leaveNs = channel[k].edgeNs();
+            leaveNs = gate(k).edgeNs();
             endEstimateNs = fallEstimate(k);
         }
-        if (channel[k].isOn()) {
-            if (channel[k].edgeNs() - leaveNs <= gapNs[k] || waiting) {
+        if (gate(k).isOn()) {
+            if (gate(k).edgeNs() - leaveNs <= gapNs[k] || waiting) {
                 // back within the gap, or while the point still waited for its physical end: the same point
                 phase = ACTIVE;
                 waiting = false;
@@ -379,7 +392,7 @@ public final class PointDetector implements Detector {
             begin(j, now, top);
             return;
         }
-        long rising = channel[k].pendingNs();
+        long rising = gate(k).pendingNs();
         boolean riseInGap = rising != NONE && rising - leaveNs <= gapNs[k];
         if (now - leaveNs > gapNs[k] && !riseInGap) {
             if (!physicalEndKnown(k, now)) {
@@ -411,11 +424,37 @@ public final class PointDetector implements Detector {
         return physicalEndNs != NONE;
     }
 
+    /** The switch that keeps the open point on: its channel, or the lower one it entered by with its rules. */
+    private Hysteresis gate(int k) {
+        return pointAssisted ? assist[k] : channel[k];
+    }
+
+    /** Kind {@code c} has entered: its channel is on, or its lower one with every live rule of it passed. */
+    private boolean entered(int c) {
+        if (channel[c].isOn()) {
+            return true;
+        }
+        if (!assisted[c] || !assist[c].isOn() || candidateNs[c] == NONE) {
+            return false;
+        }
+        GuardRule[] rs = rules[c];
+        boolean any = false;
+        for (int r = 0; r < rs.length; r++) {
+            if (rs[r].confirmsLive()) {
+                if (rs[r].liveOutcome() != RuleOutcome.PASSED) {
+                    return false;
+                }
+                any = true;
+            }
+        }
+        return any;
+    }
+
     /** The class with its channel on and the highest smoothed probability, other than {@code except}; or -1. */
     private int strongestOn(int except) {
         int best = -1;
         for (int c : kindClasses) {
-            if (c != except && channel[c].isOn() && (best < 0 || smoothed[c] > smoothed[best])) {
+            if (c != except && entered(c) && (best < 0 || smoothed[c] > smoothed[best])) {
                 best = c;
             }
         }
@@ -434,7 +473,7 @@ public final class PointDetector implements Detector {
 
     /** Where the raw probability of class {@code c} rose above the edge, within reach of its entry. */
     private long riseEstimate(int c) {
-        long anchor = channel[c].edgeNs();
+        long anchor = (channel[c].isOn() ? channel[c] : assist[c]).edgeNs();
         long rise = edge[c].riseNs();
         if (rise == NONE || rise > anchor) {
             rise = anchor;
@@ -448,6 +487,7 @@ public final class PointDetector implements Detector {
             b = Math.max(b, lastEndNs);
         }
         classifierBeginNs = b;
+        pointAssisted = !channel[c].isOn();
         String moved = null;
         long physical = departs[c] ? refiner.departureBegin(b, lastEndNs, now)
                 : accelerates[c] ? refiner.accelBegin(b, lastEndNs) : NONE;
@@ -479,6 +519,11 @@ public final class PointDetector implements Detector {
         addFeatures(ev);
         ev.add("entered: smoothed p(" + classes.name(c) + ") above " + settings.enterProbability() + " for "
                 + settings.enterS() + " s from " + seconds(channel[c].edgeNs()) + " s");
+        if (pointAssisted) {
+            ev.set(ev.size() - 1, "entered: smoothed p(" + classes.name(c) + ") above "
+                    + settings.boundaries().assistEnterProbability() + " for " + settings.enterS() + " s from "
+                    + seconds(assist[c].edgeNs()) + " s, with its rules passed (" + BoundaryRules.PHYSICS_ENTRY + ")");
+        }
         if (moved != null) {
             ev.add(moved);
         }
@@ -489,6 +534,7 @@ public final class PointDetector implements Detector {
         ManoeuvreKind from = classes.kind(k);
         ManoeuvreKind to = classes.kind(j);
         channel[k].reset();
+        assist[k].reset();
         candidateNs[k] = NONE;
         if (settings.allowsSwitch(from, to)) {
             String note = "switched from " + from.key() + " to " + to.key() + " at " + seconds(now) + " s";
