@@ -15,6 +15,9 @@ import org.pointcall.shared.kind.ManoeuvreKind;
  * <li>{@code end-recovery}: after the manoeuvre's core (the AoA maximum of a stall, the last highest third of the
  * roll rate of a roll, of the load factor of a wind-up turn, of |AoS| of a sideslip), the first stretch of steady
  * flight ({@link BoundarySettings}) as long as the dwell; the end is the end of that stretch.</li>
+ * <li>{@code stabilised-extent}: the end goes on over every sample that still holds the point's Hp (within 50 ft
+ * of its mean) and CAS (within 1 %), wings level, with no departure; the begin is left to the classifier, because
+ * the approach to a stabilised point holds its numbers too before the point is called.</li>
  * <li>{@code accel-extent}: the begin goes back over every sample still gaining speed; the end is the highest CAS
  * (mean over 2 s) before it has dropped by {@link BoundarySettings#accelDropMps()}.</li>
  * </ul>
@@ -25,6 +28,13 @@ final class BoundaryRefiner {
     private static final double BREAK_FALL_RAD = Math.toRadians(2);
     /** The foot of a departure is looked for at most this far before its threshold crossing, s. */
     private static final double FOOT_S = 2.0;
+    /** Level acceleration: Nz off the level value by this, or a bank beyond this, ends the run. */
+    private static final double ACCEL_END_NZ = 0.3;
+    private static final double ACCEL_END_BANK_RAD = Math.toRadians(15);
+    /** Stabilised hold: Hp within this of the point's mean (the 100 ft band usual for such points [memory]). */
+    private static final double HOLD_HP_M = 50 * 0.3048;
+    /** Stabilised hold: CAS within this fraction of the point's mean. */
+    private static final double HOLD_CAS_FRACTION = 0.01;
 
     private static final boolean DEBUG = Boolean.getBoolean("pointcall.debug");
     private final PhysicsHistory h;
@@ -386,6 +396,92 @@ final class BoundaryRefiner {
         return h.timeNs(i);
     }
 
+    /** Last sample in [at, until) whose CAS mean is still within a quarter of the drop of {@code best}. */
+    private int lastNear(int at, int until, double best) {
+        int last = at;
+        for (int i = at; i < until; i++) {
+            if (casMean[i] >= best - 0.25 * s.accelDropMps()) {
+                last = i;
+            }
+        }
+        return last;
+    }
+
+    /**
+     * {@code stabilised-extent}: where the hold ended after {@code endNs}: the first sample from there that no longer
+     * holds the point's Hp and CAS or departs, seen by {@code nowNs}; NONE while it still holds.
+     */
+    long holdEnd(long beginNs, long endNs, long nowNs) {
+        int ib = h.indexAtOrAfter(beginNs);
+        int ie = h.indexAtOrAfter(endNs);
+        int i1 = h.indexAtOrAfter(nowNs + 1);
+        if (ie - ib < 4 || i1 <= ie) {
+            return NONE;
+        }
+        prepare(ib, i1);
+        holdReference(ib, ie);
+        // the classifier's own end may lie past the hold: look from the last sample that still held before it
+        int i = ib;
+        while (i < i1 && (holding(i) || i < ie && holdingAhead(i, ie))) {
+            i++;
+        }
+        // a departure is seen with up to a second of smoothing: the last full second must be in
+        if (i >= i1 || ts[i1 - 1] - ts[i] < 1.0) {
+            return NONE;
+        }
+        return h.timeNs(i);
+    }
+
+    /** True when a sample in (i, ie) holds again (a brief gust inside the classifier's stretch). */
+    private boolean holdingAhead(int i, int ie) {
+        for (int k = i + 1; k < ie && ts[k] - ts[i] <= 1.0; k++) {
+            if (holding(k)) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private double refHp;
+    private double refCas;
+
+    private void holdReference(int i0, int i1) {
+        double sh = 0;
+        double sc = 0;
+        int nh = 0;
+        int nc = 0;
+        for (int i = i0; i < i1; i++) {
+            double hp = h.value(i, PhysicalQuantity.HP);
+            if (Double.isFinite(hp)) {
+                sh += hp;
+                nh++;
+            }
+            if (Double.isFinite(casMean[i])) {
+                sc += casMean[i];
+                nc++;
+            }
+        }
+        refHp = nh > 0 ? sh / nh : Double.NaN;
+        refCas = nc > 0 ? sc / nc : Double.NaN;
+    }
+
+    /** Sample {@code i} holds the reference Hp and CAS, wings level, with no departure. */
+    private boolean holding(int i) {
+        if (dep[i] >= 1.0) {
+            return false;
+        }
+        double hp = h.value(i, PhysicalQuantity.HP);
+        if (Double.isFinite(hp) && Double.isFinite(refHp) && Math.abs(hp - refHp) > HOLD_HP_M) {
+            return false;
+        }
+        if (Double.isFinite(casMean[i]) && Double.isFinite(refCas)
+                && Math.abs(casMean[i] - refCas) > HOLD_CAS_FRACTION * refCas) {
+            return false;
+        }
+        double bank = h.value(i, PhysicalQuantity.ROLL);
+        return !Double.isFinite(bank) || Math.abs(bank) < s.steadyBankRad() + Math.toRadians(1);
+    }
+
     /** Relative CAS gain from {@code beginNs} to {@code endNs} (means over 2 s); NaN without CAS. */
     double speedGain(long beginNs, long endNs) {
         int i0 = h.indexAtOrAfter(beginNs);
@@ -418,17 +514,19 @@ final class BoundaryRefiner {
         prepare(i0, i1);
         double best = Double.NEGATIVE_INFINITY;
         int at = -1;
-        // the mean over 2 s is complete 1 s before now
+        // the mean over 2 s is complete 1 s before now; a pull or a bank ends the run at once
         for (int i = i0; i < i1 && ts[i] <= ts[i1 - 1] - 1.0; i++) {
             double v = casMean[i];
             if (!Double.isFinite(v)) {
                 continue;
             }
-            if (v > best) {
+            boolean manoeuvre = ts[i] - ts[i0] > 5.0 && (term(i, 1) * s.departureNz() > ACCEL_END_NZ
+                    || Math.abs(h.value(i, PhysicalQuantity.ROLL)) > ACCEL_END_BANK_RAD);
+            if (v > best && !manoeuvre) {
                 best = v;
                 at = i;
-            } else if (v < best - s.accelDropMps()) {
-                return h.timeNs(at);
+            } else if (v < best - s.accelDropMps() || manoeuvre) {
+                return at < 0 ? NONE : h.timeNs(lastNear(at, i, best));
             }
         }
         return NONE;

@@ -16,6 +16,8 @@ public final class BoundaryRules {
     public static final String END_RECOVERY = "end-recovery";
     /** A level acceleration spans the whole stretch of gaining speed, up to the highest speed before it is lost. */
     public static final String ACCEL_EXTENT = "accel-extent";
+    /** A stabilised point spans the whole hold of its Hp and CAS around the classifier's stretch. */
+    public static final String STABILISED_EXTENT = "stabilised-extent";
     /** A level acceleration must gain a good share of its entry speed: the whole point is judged on it. */
     public static final String ACCEL_GAIN = "accel-gain";
     /**
@@ -28,7 +30,7 @@ public final class BoundaryRules {
 
     /** Every boundary rule name, in documentation order. */
     public static final List<String> NAMES = List.of(BEGIN_DEPARTURE, END_RECOVERY, ACCEL_EXTENT, ACCEL_GAIN,
-            FRAGMENT_MERGE, PHYSICS_ENTRY);
+            FRAGMENT_MERGE, PHYSICS_ENTRY, STABILISED_EXTENT);
 
     private BoundaryRules() {
     }
@@ -53,7 +55,7 @@ public final class BoundaryRules {
             case LEVEL_ACCEL:
                 return List.of(ACCEL_EXTENT, ACCEL_GAIN, FRAGMENT_MERGE);
             case STABILISED:
-                return List.of(FRAGMENT_MERGE);
+                return List.of(STABILISED_EXTENT, FRAGMENT_MERGE);
             default:
                 return List.of();
         }

@@ -63,6 +63,7 @@ public final class PointDetector implements Detector {
     private final boolean[] recovers;
     private final boolean[] accelerates;
     private final boolean[] gains;
+    private final boolean[] holds;
     private final long[] gapNs;
     private final long recoveryWaitNs;
     private final long accelWaitNs;
@@ -164,6 +165,7 @@ public final class PointDetector implements Detector {
         this.recovers = new boolean[n];
         this.accelerates = new boolean[n];
         this.gains = new boolean[n];
+        this.holds = new boolean[n];
         this.gapNs = new long[n];
         long fragmentNs = Math.round(settings.boundaries().fragmentGapS() * 1e9);
         for (int c = 0; c < n; c++) {
@@ -176,6 +178,7 @@ public final class PointDetector implements Detector {
             recovers[c] = BoundaryRules.applies(BoundaryRules.END_RECOVERY, k, settings);
             accelerates[c] = BoundaryRules.applies(BoundaryRules.ACCEL_EXTENT, k, settings);
             gains[c] = BoundaryRules.applies(BoundaryRules.ACCEL_GAIN, k, settings);
+            holds[c] = BoundaryRules.applies(BoundaryRules.STABILISED_EXTENT, k, settings);
             if (BoundaryRules.applies(BoundaryRules.FRAGMENT_MERGE, k, settings)) {
                 gapNs[c] = Math.max(mergeGapNs, fragmentNs);
             }
@@ -408,10 +411,10 @@ public final class PointDetector implements Detector {
      * wait for it is over; true at once for other kinds. Checked at most every {@link #END_CHECK_NS}.
      */
     private boolean physicalEndKnown(int k, long now) {
-        if (!recovers[k] && !accelerates[k]) {
+        if (!recovers[k] && !accelerates[k] && !holds[k]) {
             return true;
         }
-        long wait = accelerates[k] ? accelWaitNs : recoveryWaitNs;
+        long wait = recovers[k] ? recoveryWaitNs : accelWaitNs;
         if (now - endEstimateNs > wait) {
             return true;
         }
@@ -419,9 +422,19 @@ public final class PointDetector implements Detector {
             return false;
         }
         lastEndCheckNs = now;
-        physicalEndNs = accelerates[k] ? refiner.accelEnd(beginNs, now)
-                : refiner.recoveryEnd(classes.kind(k), beginNs, now);
+        physicalEndNs = physicalEnd(k, now);
         return physicalEndNs != NONE;
+    }
+
+    /** The end a boundary rule places for kind {@code k}'s open point, seen by {@code now}; NONE if none yet. */
+    private long physicalEnd(int k, long now) {
+        if (accelerates[k]) {
+            return refiner.accelEnd(beginNs, now);
+        }
+        if (holds[k]) {
+            return refiner.holdEnd(beginNs, endEstimateNs, now);
+        }
+        return refiner.recoveryEnd(classes.kind(k), beginNs, now);
     }
 
     /** The switch that keeps the open point on: its channel, or the lower one it entered by with its rules. */
@@ -688,11 +701,15 @@ public final class PointDetector implements Detector {
      */
     private void refineBoundaries(int k, ManoeuvreKind kind, long now, long end, long capNs, List<String> ev) {
         refinedEndNs = end;
-        if (recovers[k] || accelerates[k]) {
-            String rule = accelerates[k] ? BoundaryRules.ACCEL_EXTENT : BoundaryRules.END_RECOVERY;
+        if (recovers[k] || accelerates[k] || holds[k]) {
+            String rule = accelerates[k] ? BoundaryRules.ACCEL_EXTENT
+                    : holds[k] ? BoundaryRules.STABILISED_EXTENT : BoundaryRules.END_RECOVERY;
             long e = physicalEndNs;
             if (e == NONE) {
-                e = accelerates[k] ? refiner.accelEnd(beginNs, now) : refiner.recoveryEnd(kind, beginNs, now);
+                long keep = endEstimateNs;
+                endEstimateNs = end;
+                e = physicalEnd(k, now);
+                endEstimateNs = keep;
             }
             if (e != NONE && capNs != NONE) {
                 e = Math.min(e, capNs);
