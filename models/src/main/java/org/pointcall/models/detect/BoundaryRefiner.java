@@ -482,6 +482,36 @@ final class BoundaryRefiner {
         return !Double.isFinite(bank) || Math.abs(bank) < s.steadyBankRad() + Math.toRadians(1);
     }
 
+    /** Median |bank| from {@code beginNs} to the AoA maximum before {@code endNs}; NaN without bank or AoA. */
+    double bankToBreak(long beginNs, long endNs) {
+        int i0 = h.indexAtOrAfter(beginNs);
+        int i1 = h.indexAtOrAfter(endNs + 1);
+        int at = -1;
+        double best = Double.NEGATIVE_INFINITY;
+        for (int i = i0; i < i1; i++) {
+            double a = h.value(i, PhysicalQuantity.AOA);
+            if (Double.isFinite(a) && a > best) {
+                best = a;
+                at = i;
+            }
+        }
+        if (at < 0) {
+            return Double.NaN;
+        }
+        int n = 0;
+        for (int i = i0; i <= at; i++) {
+            double b = h.value(i, PhysicalQuantity.ROLL);
+            if (Double.isFinite(b)) {
+                dep[n++] = Math.abs(b);
+            }
+        }
+        if (n == 0) {
+            return Double.NaN;
+        }
+        java.util.Arrays.sort(dep, 0, n);
+        return n % 2 == 1 ? dep[n / 2] : 0.5 * (dep[n / 2 - 1] + dep[n / 2]);
+    }
+
     /** Relative CAS gain from {@code beginNs} to {@code endNs} (means over 2 s); NaN without CAS. */
     double speedGain(long beginNs, long endNs) {
         int i0 = h.indexAtOrAfter(beginNs);

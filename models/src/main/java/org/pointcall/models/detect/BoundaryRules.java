@@ -18,6 +18,8 @@ public final class BoundaryRules {
     public static final String ACCEL_EXTENT = "accel-extent";
     /** A stabilised point spans the whole hold of its Hp and CAS around the classifier's stretch. */
     public static final String STABILISED_EXTENT = "stabilised-extent";
+    /** A stall's kind, wings-level or turning, is told by the bank it held on the way to its break. */
+    public static final String STALL_BANK = "stall-bank";
     /** A level acceleration must gain a good share of its entry speed: the whole point is judged on it. */
     public static final String ACCEL_GAIN = "accel-gain";
     /**
@@ -30,7 +32,7 @@ public final class BoundaryRules {
 
     /** Every boundary rule name, in documentation order. */
     public static final List<String> NAMES = List.of(BEGIN_DEPARTURE, END_RECOVERY, ACCEL_EXTENT, ACCEL_GAIN,
-            FRAGMENT_MERGE, PHYSICS_ENTRY, STABILISED_EXTENT);
+            FRAGMENT_MERGE, PHYSICS_ENTRY, STABILISED_EXTENT, STALL_BANK);
 
     private BoundaryRules() {
     }
@@ -41,7 +43,7 @@ public final class BoundaryRules {
             case STALL_LEVEL:
             case STALL_TURN:
                 // an AoA peak with a fall is common outside stalls: too weak to vouch for an entry
-                return List.of(BEGIN_DEPARTURE, END_RECOVERY);
+                return List.of(BEGIN_DEPARTURE, END_RECOVERY, STALL_BANK);
             case WIND_UP_TURN:
             case AILERON_ROLL:
             case SIDESLIP:

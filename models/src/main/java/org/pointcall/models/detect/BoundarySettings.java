@@ -32,6 +32,7 @@ import org.pointcall.shared.error.PointcallException;
  * @param accelGain            {@code accel-gain}: least CAS gain of a level acceleration, a fraction of its lowest
  * @param assistEnterProbability {@code physics-entry}: a kind whose live rules passed enters above this...
  * @param assistLeaveProbability ...and such a point leaves below this
+ * @param turnBankRad          {@code stall-bank}: a stall whose median |bank| to the break is at least this turns
  */
 public record BoundarySettings(double steadyRollRateRadS, double steadyPitchRateRadS, double steadyBankRad,
                                double steadyGammaRad, double steadyDwellS, double recoveryWaitS,
@@ -39,19 +40,20 @@ public record BoundarySettings(double steadyRollRateRadS, double steadyPitchRate
                                double departureSpeedRateMps2, double departureNz, double departureBetaRad,
                                double departurePitchRateRadS, double departureRollRateRadS, double accelRateMps2,
                                double accelLookBackS, double accelDropMps, double accelWaitS, double fragmentGapS,
-                               double accelGain, double assistEnterProbability, double assistLeaveProbability) {
+                               double accelGain, double assistEnterProbability, double assistLeaveProbability,
+                               double turnBankRad) {
 
     public BoundarySettings {
         List<String> bad = new ArrayList<>();
         double[] all = {steadyRollRateRadS, steadyPitchRateRadS, steadyBankRad, steadyGammaRad, steadyDwellS,
                 recoveryWaitS, departureLookS, departureQuietS, departureActiveS, departureSpeedRateMps2, departureNz,
                 departureBetaRad, departurePitchRateRadS, departureRollRateRadS, accelRateMps2, accelLookBackS,
-                accelDropMps, accelWaitS, fragmentGapS, accelGain, assistEnterProbability, assistLeaveProbability};
+                accelDropMps, accelWaitS, fragmentGapS, accelGain, assistEnterProbability, assistLeaveProbability, turnBankRad};
         String[] names = {"steadyRollRateRadS", "steadyPitchRateRadS", "steadyBankRad", "steadyGammaRad",
                 "steadyDwellS", "recoveryWaitS", "departureLookS", "departureQuietS", "departureActiveS",
                 "departureSpeedRateMps2", "departureNz", "departureBetaRad", "departurePitchRateRadS",
                 "departureRollRateRadS", "accelRateMps2", "accelLookBackS", "accelDropMps", "accelWaitS",
-                "fragmentGapS", "accelGain", "assistEnterProbability", "assistLeaveProbability"};
+                "fragmentGapS", "accelGain", "assistEnterProbability", "assistLeaveProbability", "turnBankRad"};
         for (int i = 0; i < all.length; i++) {
             if (!(all[i] > 0) || Double.isInfinite(all[i])) {
                 bad.add(names[i] + " must be a finite number above 0, got " + all[i]);
@@ -77,13 +79,13 @@ public record BoundarySettings(double steadyRollRateRadS, double steadyPitchRate
      * above 0.05 m/s2, looked for up to 120 s back, ended 0.5 m/s (1 kt) below the highest CAS, waited up to 60 s.
      * Long points bridge 8 s gaps. A level acceleration gains at least 5 % of its lowest CAS (its purpose is a
      * sweep of speed; the demo card's runs gain over 15 %). A kind whose live rules passed enters above 0.35 and
-     * leaves below 0.2.
+     * leaves below 0.2. A stall held beyond 15 deg of bank to its break is a turning one.
      */
     public static BoundarySettings defaults() {
         double deg = Math.PI / 180;
         return new BoundarySettings(3 * deg, 1.5 * deg, 4 * deg, 1.5 * deg, 2.0, 30.0,
                 10.0, 1.0, 1.0, 0.15, 0.1, 1.5 * deg, 2 * deg, 5 * deg,
-                0.05, 120.0, 0.5, 60.0, 8.0, 0.05, 0.35, 0.2);
+                0.05, 120.0, 0.5, 60.0, 8.0, 0.05, 0.35, 0.2, 15 * deg);
     }
 
     public BoundarySettings withSteadyDwellS(double v) {
@@ -91,7 +93,7 @@ public record BoundarySettings(double steadyRollRateRadS, double steadyPitchRate
                 recoveryWaitS, departureLookS, departureQuietS, departureActiveS, departureSpeedRateMps2, departureNz,
                 departureBetaRad, departurePitchRateRadS, departureRollRateRadS, accelRateMps2, accelLookBackS,
                 accelDropMps, accelWaitS, fragmentGapS, accelGain,
-                assistEnterProbability, assistLeaveProbability);
+                assistEnterProbability, assistLeaveProbability, turnBankRad);
     }
 
     public BoundarySettings withAccelGain(double v) {
@@ -99,7 +101,7 @@ public record BoundarySettings(double steadyRollRateRadS, double steadyPitchRate
                 steadyDwellS, recoveryWaitS, departureLookS, departureQuietS, departureActiveS,
                 departureSpeedRateMps2, departureNz, departureBetaRad, departurePitchRateRadS, departureRollRateRadS,
                 accelRateMps2, accelLookBackS, accelDropMps, accelWaitS, fragmentGapS, v, assistEnterProbability,
-                assistLeaveProbability);
+                assistLeaveProbability, turnBankRad);
     }
 
     public BoundarySettings withFragmentGapS(double v) {
@@ -107,6 +109,6 @@ public record BoundarySettings(double steadyRollRateRadS, double steadyPitchRate
                 steadyDwellS, recoveryWaitS, departureLookS, departureQuietS, departureActiveS,
                 departureSpeedRateMps2, departureNz, departureBetaRad, departurePitchRateRadS, departureRollRateRadS,
                 accelRateMps2, accelLookBackS, accelDropMps, accelWaitS, v, accelGain, assistEnterProbability,
-                assistLeaveProbability);
+                assistLeaveProbability, turnBankRad);
     }
 }

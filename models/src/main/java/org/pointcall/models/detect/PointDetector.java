@@ -390,6 +390,12 @@ public final class PointDetector implements Detector {
             endEstimateNs = fallEstimate(k);
         }
         int j = strongestOn(k);
+        if (j >= 0 && recovers[k] && settings.allowsSwitch(classes.kind(k), classes.kind(j))) {
+            // a kind the closing point may become, while it still waits for its physical end: the same manoeuvre
+            // seen again (a turning stall lost before its break, its recovery called a stall)
+            switchWhileClosing(k, j, now, top);
+            return;
+        }
         if (j >= 0) {
             close(now, endEstimateNs, null, riseEstimate(j));
             begin(j, now, top);
@@ -570,6 +576,31 @@ public final class PointDetector implements Detector {
         begin(j, now, top);
     }
 
+    private void switchWhileClosing(int k, int j, long now, String[] top) {
+        ManoeuvreKind from = classes.kind(k);
+        ManoeuvreKind to = classes.kind(j);
+        String note = "switched from " + from.key() + " to " + to.key() + " at " + seconds(now)
+                + " s while waiting for its end";
+        switchNote = switchNote == null ? note : switchNote + "; " + note;
+        channel[k].reset();
+        assist[k].reset();
+        candidateNs[k] = NONE;
+        phase = ACTIVE;
+        waiting = false;
+        physicalEndNs = NONE;
+        merges++;
+        pointClass = j;
+        pointAssisted = !channel[j].isOn();
+        confirmed = false;
+        if (candidateNs[j] == NONE) {
+            restart(j, now);
+        }
+        List<String> ev = new ArrayList<>();
+        addFeatures(ev);
+        ev.add(switchNote);
+        emit(PointEvent.Type.REFINED, now, NONE, List.of(), ev, liveConfidence(j));
+    }
+
     private void confirmIfReady(long now) {
         if (confirmed) {
             return;
@@ -683,6 +714,8 @@ public final class PointDetector implements Detector {
             ev.add(note);
         }
         double conf = keptCount[k] > 0 ? keptSum[k] / keptCount[k] : liveConfidence(k);
+        int told = stallByBank(k, kind, end, ev);
+        pointClass = told;
         emit(ok ? PointEvent.Type.ENDED : PointEvent.Type.DISCARDED, now, end, keys, ev, conf);
         if (ok) {
             lastEndNs = end;
@@ -694,6 +727,31 @@ public final class PointDetector implements Detector {
     }
 
     private long refinedEndNs;
+
+    /**
+     * {@code stall-bank}: a stall is a turning one when the bank held on its way to the break (median |bank| from
+     * the begin to the AoA maximum) is beyond the settings' bank, else a wings-level one; the class to report.
+     */
+    private int stallByBank(int k, ManoeuvreKind kind, long end, List<String> ev) {
+        if (!(kind == ManoeuvreKind.STALL_LEVEL || kind == ManoeuvreKind.STALL_TURN)
+                || !BoundaryRules.applies(BoundaryRules.STALL_BANK, kind, settings)) {
+            return k;
+        }
+        double bank = refiner.bankToBreak(beginNs, end);
+        if (Double.isNaN(bank)) {
+            return k;
+        }
+        ManoeuvreKind told = bank >= settings.boundaries().turnBankRad() ? ManoeuvreKind.STALL_TURN
+                : ManoeuvreKind.STALL_LEVEL;
+        int c = classes.indexOf(told);
+        if (c < 0) {
+            return k;
+        }
+        ev.add(BoundaryRules.STALL_BANK + ": median bank to the break " + GuardRule.deg(bank) + " deg (turning from "
+                + GuardRule.deg(settings.boundaries().turnBankRad()) + "): " + told.key()
+                + (told == kind ? "" : ", was " + kind.key()));
+        return c;
+    }
 
     /**
      * The boundary rules: the end where the physics says the point was over (found while waiting, or now), the begin
