@@ -482,6 +482,21 @@ final class BoundaryRefiner {
         return !Double.isFinite(bank) || Math.abs(bank) < s.steadyBankRad() + Math.toRadians(1);
     }
 
+    /**
+     * Whether the latest state holds what the end of a {@code kind} point is placed by (CAS for a level acceleration
+     * or a stabilised point, a rate or the bank otherwise): without it there is nothing to wait for.
+     */
+    boolean canPlaceEnd(ManoeuvreKind kind) {
+        int last = h.size() - 1;
+        if (last < 0) {
+            return false;
+        }
+        if (kind == ManoeuvreKind.LEVEL_ACCEL || kind == ManoeuvreKind.STABILISED) {
+            return Double.isFinite(h.value(last, PhysicalQuantity.CAS));
+        }
+        return Double.isFinite(h.value(last, PhysicalQuantity.P)) || Double.isFinite(h.value(last, PhysicalQuantity.ROLL));
+    }
+
     /** Median |bank| from {@code beginNs} to the AoA maximum before {@code endNs}; NaN without bank or AoA. */
     double bankToBreak(long beginNs, long endNs) {
         int i0 = h.indexAtOrAfter(beginNs);

@@ -421,7 +421,7 @@ public final class PointDetector implements Detector {
             return true;
         }
         long wait = recovers[k] ? recoveryWaitNs : accelWaitNs;
-        if (now - endEstimateNs > wait) {
+        if (now - endEstimateNs > wait || !refiner.canPlaceEnd(classes.kind(k))) {
             return true;
         }
         if (waiting && now - lastEndCheckNs < END_CHECK_NS) {
@@ -774,8 +774,9 @@ public final class PointDetector implements Detector {
             }
             if (e != NONE && e > beginNs) {
                 ev.add("end moved to " + rule + " at " + seconds(e) + " s from " + seconds(end) + " s");
-                if (e > end) {
-                    // the rules judge everything seen up to the physical end, not only the classifier's stretch
+                if (e > end && recovers[k]) {
+                    // the rules judge everything seen up to the recovery, not only the classifier's stretch (a
+                    // turning stall the classifier lost before its break)
                     for (GuardRule r : rules[k]) {
                         r.mark();
                     }
