@@ -270,14 +270,14 @@ final class BoundaryRefiner {
      * {@code end-recovery}: the end of the first steady stretch after the core of a {@code kind} point begun at
      * {@code beginNs}, seen by {@code nowNs}; NONE when there is none yet.
      */
-    long recoveryEnd(ManoeuvreKind kind, long beginNs, long nowNs) {
+    long recoveryEnd(ManoeuvreKind kind, long beginNs, long coreUntilNs, long nowNs) {
         int i0 = h.indexAtOrAfter(beginNs);
         int i1 = h.indexAtOrAfter(nowNs + 1);
         if (i1 - i0 < 4) {
             return NONE;
         }
         prepare(i0, i1);
-        int core = core(kind, i0, i1);
+        int core = core(kind, i0, Math.min(i1, h.indexAtOrAfter(coreUntilNs + 1)), i1);
         if (core < 0) {
             return NONE;
         }
@@ -297,14 +297,14 @@ final class BoundaryRefiner {
         return NONE;
     }
 
-    /** The last sample of the manoeuvre's core in [i0, i1), or -1. */
-    private int core(ManoeuvreKind kind, int i0, int i1) {
+    /** The last sample of the manoeuvre's core in [i0, ic), with what follows up to i1; or -1. */
+    private int core(ManoeuvreKind kind, int i0, int ic, int i1) {
         switch (kind) {
             case STALL_LEVEL:
             case STALL_TURN: {
                 int at = -1;
                 double best = Double.NEGATIVE_INFINITY;
-                for (int i = i0; i < i1; i++) {
+                for (int i = i0; i < ic; i++) {
                     double a = h.value(i, PhysicalQuantity.AOA);
                     if (Double.isFinite(a) && a > best) {
                         best = a;
@@ -321,11 +321,11 @@ final class BoundaryRefiner {
                 return -1;
             }
             case AILERON_ROLL:
-                return lastAbove(i0, i1, pMean, 0.0, 2.0 / 3.0);
+                return lastAbove(i0, ic, pMean, 0.0, 2.0 / 3.0);
             case SIDESLIP:
-                return lastAbove(i0, i1, null, 0.0, 2.0 / 3.0);
+                return lastAbove(i0, ic, null, 0.0, 2.0 / 3.0);
             case WIND_UP_TURN:
-                return lastAboveNz(i0, i1);
+                return lastAboveNz(i0, ic);
             default:
                 return -1;
         }
@@ -371,6 +371,33 @@ final class BoundaryRefiner {
             }
         }
         return -1;
+    }
+
+    /**
+     * {@code begin-departure} of a stall: the first sample of the run of steady slowing (dCAS/dt below minus the
+     * settings' acceleration rate) that holds {@code beginNs}, up to the look-back of a level acceleration; NONE
+     * when the aircraft is not slowing there. A slow stall entry is long, and the classifier may rise late in it.
+     */
+    long decelBegin(long beginNs, long floorNs) {
+        long a = beginNs - Math.round(s.accelLookBackS() * 1e9);
+        if (floorNs != NONE) {
+            a = Math.max(a, floorNs);
+        }
+        int i0 = h.indexAtOrAfter(a);
+        int ib = h.indexAtOrAfter(beginNs);
+        int i1 = Math.min(h.size(), ib + 40);
+        if (ib >= h.size() || ib - i0 < 2) {
+            return NONE;
+        }
+        prepare(i0, i1);
+        int i = ib;
+        if (!(casRate[i] < -s.accelRateMps2())) {
+            return NONE;
+        }
+        while (i - 1 >= i0 && casRate[i - 1] < -s.accelRateMps2()) {
+            i--;
+        }
+        return h.timeNs(i);
     }
 
     /** {@code accel-extent}: the first sample of the run of speed gain that holds {@code beginNs}; NONE if none. */

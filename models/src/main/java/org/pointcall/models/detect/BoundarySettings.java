@@ -76,16 +76,16 @@ public record BoundarySettings(double steadyRollRateRadS, double steadyPitchRate
      * Steady flight: |P| < 3 deg/s, |Q| < 1.5 deg/s, |bank| < 4 deg, |gamma| < 1.5 deg held for 2 s; wait up to 30 s
      * for it. Departure looked for 10 s either side, after 1 s quiet and followed by 1 s active, beyond 0.15 m/s2
      * (0.3 kt/s) of speed rate, 0.1 g of Nz, 1.5 deg of AoS, 2 deg/s of Q or 5 deg/s of P. Level acceleration gaining
-     * above 0.05 m/s2, looked for up to 120 s back, ended 0.5 m/s (1 kt) below the highest CAS, waited up to 60 s.
+     * above 0.05 m/s2, looked for up to 120 s back, ended 0.5 m/s (1 kt) below the highest CAS, waited up to 120 s.
      * Long points bridge 8 s gaps. A level acceleration gains at least 5 % of its lowest CAS (its purpose is a
-     * sweep of speed; the demo card's runs gain over 15 %). A kind whose live rules passed enters above 0.35 and
-     * leaves below 0.2. A stall held beyond 15 deg of bank to its break is a turning one.
+     * sweep of speed; the demo card's runs gain over 15 %). A kind whose live rules passed enters above 0.25 (the
+     * raw level from which its rules are fed) and leaves below 0.15. A stall held beyond 15 deg of bank to its break is a turning one.
      */
     public static BoundarySettings defaults() {
         double deg = Math.PI / 180;
         return new BoundarySettings(3 * deg, 1.5 * deg, 4 * deg, 1.5 * deg, 2.0, 30.0,
                 10.0, 1.0, 1.0, 0.15, 0.1, 1.5 * deg, 2 * deg, 5 * deg,
-                0.05, 120.0, 0.5, 60.0, 8.0, 0.05, 0.35, 0.2, 15 * deg);
+                0.05, 120.0, 0.5, 120.0, 8.0, 0.05, 0.25, 0.15, 15 * deg);
     }
 
     public BoundarySettings withSteadyDwellS(double v) {

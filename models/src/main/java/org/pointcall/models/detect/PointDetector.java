@@ -69,6 +69,8 @@ public final class PointDetector implements Detector {
     private final long accelWaitNs;
     /** Checks for the physical end while a point waits for it, at most this often. */
     private static final long END_CHECK_NS = 250_000_000L;
+    /** A manoeuvre's core (a stall's break) is looked for up to this long after the classifier's end, ns. */
+    private static final long CORE_AFTER_END_NS = 10_000_000_000L;
 
     private final long maxRefineNs;
     private final long mergeGapNs;
@@ -440,7 +442,22 @@ public final class PointDetector implements Detector {
         if (holds[k]) {
             return refiner.holdEnd(beginNs, endEstimateNs, now);
         }
-        return refiner.recoveryEnd(classes.kind(k), beginNs, now);
+        return refiner.recoveryEnd(classes.kind(k), beginNs, endEstimateNs + CORE_AFTER_END_NS, now);
+    }
+
+    /**
+     * The begin-departure search's anchor: the classifier's begin, or for a stall the start of the steady slowing
+     * that holds it (the classifier may rise late in a long entry).
+     */
+    private long departureAnchor(int c, long b) {
+        ManoeuvreKind k = classes.kind(c);
+        if (k == ManoeuvreKind.STALL_LEVEL || k == ManoeuvreKind.STALL_TURN) {
+            long d = refiner.decelBegin(b, lastEndNs);
+            if (d != NONE) {
+                return d;
+            }
+        }
+        return b;
     }
 
     /** The switch that keeps the open point on: its channel, or the lower one it entered by with its rules. */
@@ -508,7 +525,7 @@ public final class PointDetector implements Detector {
         classifierBeginNs = b;
         pointAssisted = !channel[c].isOn();
         String moved = null;
-        long physical = departs[c] ? refiner.departureBegin(b, lastEndNs, now)
+        long physical = departs[c] ? refiner.departureBegin(departureAnchor(c, b), lastEndNs, now)
                 : accelerates[c] ? refiner.accelBegin(b, lastEndNs) : NONE;
         if (physical != NONE && physical <= now) {
             moved = "begin at " + (departs[c] ? BoundaryRules.BEGIN_DEPARTURE : BoundaryRules.ACCEL_EXTENT) + " "
@@ -788,7 +805,7 @@ public final class PointDetector implements Detector {
         }
         if (departs[k] || accelerates[k]) {
             String rule = departs[k] ? BoundaryRules.BEGIN_DEPARTURE : BoundaryRules.ACCEL_EXTENT;
-            long b = departs[k] ? refiner.departureBegin(classifierBeginNs, lastEndNs, now)
+            long b = departs[k] ? refiner.departureBegin(departureAnchor(k, classifierBeginNs), lastEndNs, now)
                     : refiner.accelBegin(classifierBeginNs, lastEndNs);
             if (b != NONE && b != beginNs && b < refinedEndNs && (lastEndNs == NONE || b >= lastEndNs)) {
                 ev.add("begin moved to " + rule + " at " + seconds(b) + " s from " + seconds(beginNs) + " s");
