@@ -144,8 +144,8 @@ public record DetectorSettings(Smoothing smoothing, double smoothingS, double en
      */
     public static Map<ManoeuvreKind, Double> defaultMinDurationsS() {
         Map<ManoeuvreKind, Double> m = new EnumMap<>(ManoeuvreKind.class);
-        m.put(ManoeuvreKind.STALL_LEVEL, 5.0);
-        m.put(ManoeuvreKind.STALL_TURN, 5.0);
+        m.put(ManoeuvreKind.STALL_LEVEL, 10.0);
+        m.put(ManoeuvreKind.STALL_TURN, 10.0);
         m.put(ManoeuvreKind.LOOP, 8.0);
         m.put(ManoeuvreKind.WIND_UP_TURN, 8.0);
         m.put(ManoeuvreKind.LEVEL_ACCEL, 15.0);
