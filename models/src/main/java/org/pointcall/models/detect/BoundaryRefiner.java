@@ -59,8 +59,13 @@ final class BoundaryRefiner {
         this.s = settings;
     }
 
-    /** Fills the derived signals over the kept states [i0, i1). */
+    /** Fills the derived signals over the kept states [i0, i1), with the departure measure. */
     private void prepare(int i0, int i1) {
+        prepare(i0, i1, true);
+    }
+
+    /** Fills the derived signals over the kept states [i0, i1); the departure measure only if asked (it costs most). */
+    private void prepare(int i0, int i1, boolean departures) {
         from = i0;
         to = i1;
         if (i1 <= i0) {
@@ -101,6 +106,9 @@ final class BoundaryRefiner {
             casRate[i] = n >= 3 && den > 1e-12 ? (n * stv - st * sv) / den : Double.NaN;
         }
         mean(PhysicalQuantity.P, pMean, 0.25);
+        if (!departures) {
+            return;
+        }
         mean(PhysicalQuantity.Q, qMean, 0.25);
         for (int i = i0; i < i1; i++) {
             dep[i] = departure(i);
@@ -276,7 +284,7 @@ final class BoundaryRefiner {
         if (i1 - i0 < 4) {
             return NONE;
         }
-        prepare(i0, i1);
+        prepare(i0, i1, false);
         int core = core(kind, i0, Math.min(i1, h.indexAtOrAfter(coreUntilNs + 1)), i1);
         if (core < 0) {
             return NONE;
@@ -389,7 +397,7 @@ final class BoundaryRefiner {
         if (ib >= h.size() || ib - i0 < 2) {
             return NONE;
         }
-        prepare(i0, i1);
+        prepare(i0, i1, false);
         int i = ib;
         if (!(casRate[i] < -s.accelRateMps2())) {
             return NONE;
@@ -412,7 +420,7 @@ final class BoundaryRefiner {
         if (ib >= h.size() || ib - i0 < 2) {
             return NONE;
         }
-        prepare(i0, i1);
+        prepare(i0, i1, false);
         int i = ib;
         if (!(casRate[i] > s.accelRateMps2())) {
             return NONE;
@@ -561,7 +569,7 @@ final class BoundaryRefiner {
         if (i1 - i0 < 2) {
             return Double.NaN;
         }
-        prepare(i0, i1);
+        prepare(i0, i1, false);
         double lo = Double.NaN;
         double hi = Double.NaN;
         for (int i = i0; i < i1; i++) {
@@ -583,7 +591,7 @@ final class BoundaryRefiner {
         if (i1 - i0 < 4) {
             return NONE;
         }
-        prepare(i0, i1);
+        prepare(i0, i1, false);
         double best = Double.NEGATIVE_INFINITY;
         int at = -1;
         // the mean over 2 s is complete 1 s before now; a pull or a bank ends the run at once

@@ -120,7 +120,7 @@ public final class StreamingScorer {
         }
         return new SortieResult(name, airframe, TruePoint.fromLabels(aligned), run.detected, run.discarded,
                 truthClass, Arrays.copyOf(run.predicted, run.ticks), Units.nsToSeconds(run.firstFrameNs),
-                Units.nsToSeconds(run.lastFrameNs), run.classifierNs, read.framesDelivered(), read.rowsSkipped());
+                Units.nsToSeconds(run.lastFrameNs), run.classifierNs, run.detectorNs, read.framesDelivered(), read.rowsSkipped());
     }
 
     /** One recording's pipeline and what it has produced so far. */
@@ -135,6 +135,7 @@ public final class StreamingScorer {
         int[] predicted = new int[4096];
         int ticks;
         long classifierNs;
+        long detectorNs;
         long frames;
         long firstFrameNs;
         long lastFrameNs;
@@ -157,12 +158,14 @@ public final class StreamingScorer {
             currentFrameNs = f.timeNs();
             derived.apply(f);
             extractor.onFrame(f);
+            long t0 = System.nanoTime();
             detector.onFrame(f);
             // a tick at this frame's own instant fired inside the extractor; the detector gets it after the frame
             if (pending) {
                 pending = false;
                 detector.onTick(pendingNs, posterior);
             }
+            detectorNs += System.nanoTime() - t0;
         }
 
         void onFeatures(long timeNs, double[] features, boolean[] valid, double[] coverage) {
@@ -180,7 +183,9 @@ public final class StreamingScorer {
                 pending = true;
                 pendingNs = timeNs;
             } else {
+                long t1 = System.nanoTime();
                 detector.onTick(timeNs, posterior);
+                detectorNs += System.nanoTime() - t1;
             }
         }
 

@@ -126,5 +126,6 @@ public final class DetectionHarness {
         }
         System.out.println("events.discarded: " + discarded);
         System.out.println(String.format(Locale.ROOT, "cost.classifier-ns-per-tick: %.0f", e.classifierNsPerTick()));
+        System.out.println(String.format(Locale.ROOT, "cost.detector-ns-per-tick: %.0f", e.detectorNsPerTick()));
     }
 }
