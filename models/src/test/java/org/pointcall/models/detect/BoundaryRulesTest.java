@@ -172,7 +172,7 @@ class BoundaryRulesTest {
         SyntheticSortie s = run(DetectorSettings.defaults(), 30, doublet(), unsure);
         PointEvent kept = s.onlyFinal();
         assertEquals(ENDED, kept.type(), kept.evidence()::toString);
-        assertTrue(s.ofType(PointEvent.Type.BEGUN).get(0).hasEvidence("entered: smoothed p(pitch-doublet) above 0.35"),
+        assertTrue(s.ofType(PointEvent.Type.BEGUN).get(0).hasEvidence("entered: smoothed p(pitch-doublet) above 0.25"),
                 s.events::toString);
         assertTrue(run(without(BoundaryRules.PHYSICS_ENTRY), 30, doublet(), unsure).events.isEmpty(),
                 "below p_on and without the rule: nothing");

@@ -108,7 +108,7 @@ class PointDetectorTest {
         SyntheticSortie s = run(DetectorSettings.defaults(), 30, 5L, new Bump(ManoeuvreKind.STALL_LEVEL, 10, 13, 0.9));
         assertEquals(List.of(BEGUN, DISCARDED), s.types());
         PointEvent d = s.onlyFinal();
-        assertTrue(d.hasEvidence("failed min-duration: 3.00 s (needs 5.00 s)"), d.evidence()::toString);
+        assertTrue(d.hasEvidence("failed min-duration: 3.00 s (needs 10.00 s)"), d.evidence()::toString);
         assertTrue(d.hasEvidence("unchecked stall-aoa-peak"), "no physics, so the rule could not judge");
         // a shorter minimum keeps it
         SyntheticSortie kept = run(DetectorSettings.defaults().withMinDurationS(ManoeuvreKind.STALL_LEVEL, 2.5), 30, 5L,
