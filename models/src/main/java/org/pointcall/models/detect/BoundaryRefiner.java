@@ -43,6 +43,7 @@ final class BoundaryRefiner {
     private final double[] cas = new double[PhysicsHistory.CAPACITY];
     private final double[] casMean = new double[PhysicsHistory.CAPACITY];
     private final double[] casRate = new double[PhysicsHistory.CAPACITY];
+    private final double[] gamma = new double[PhysicsHistory.CAPACITY];
     private final double[] pMean = new double[PhysicsHistory.CAPACITY];
     private final double[] qMean = new double[PhysicsHistory.CAPACITY];
     private final double[] dep = new double[PhysicsHistory.CAPACITY];
@@ -105,6 +106,7 @@ final class BoundaryRefiner {
             casMean[i] = n > 0 ? sv / n : Double.NaN;
             casRate[i] = n >= 3 && den > 1e-12 ? (n * stv - st * sv) / den : Double.NaN;
         }
+        flightPath();
         mean(PhysicalQuantity.P, pMean, 0.25);
         if (!departures) {
             return;
@@ -112,6 +114,51 @@ final class BoundaryRefiner {
         mean(PhysicalQuantity.Q, qMean, 0.25);
         for (int i = i0; i < i1; i++) {
             dep[i] = departure(i);
+        }
+    }
+
+    /**
+     * Flight-path angle per sample of the prepared range: the least-squares slope of Hp over 2 s against the true
+     * airspeed, CAS over the square root of the ISA density ratio at that Hp (troposphere; Hp and CAS are what any
+     * air-data system gives, unlike a body AoA: a vane's AoA may be offset from the body's, so pitch minus AoA is
+     * not used).
+     */
+    private void flightPath() {
+        p1[from] = p2[from] = p3[from] = p4[from] = p5[from] = 0;
+        for (int i = from; i < to; i++) {
+            double v = h.value(i, PhysicalQuantity.HP);
+            boolean ok = Double.isFinite(v);
+            p1[i + 1] = p1[i] + (ok ? 1 : 0);
+            p2[i + 1] = p2[i] + (ok ? ts[i] : 0);
+            p3[i + 1] = p3[i] + (ok ? ts[i] * ts[i] : 0);
+            p4[i + 1] = p4[i] + (ok ? v : 0);
+            p5[i + 1] = p5[i] + (ok ? ts[i] * v : 0);
+        }
+        int lo = from;
+        int hi = from;
+        for (int i = from; i < to; i++) {
+            while (ts[lo] < ts[i] - 1.0) {
+                lo++;
+            }
+            while (hi < to && ts[hi] <= ts[i] + 1.0) {
+                hi++;
+            }
+            double n = p1[hi] - p1[lo];
+            double st = p2[hi] - p2[lo];
+            double stt = p3[hi] - p3[lo];
+            double sv = p4[hi] - p4[lo];
+            double stv = p5[hi] - p5[lo];
+            double den = n * stt - st * st;
+            double climb = n >= 3 && den > 1e-12 ? (n * stv - st * sv) / den : Double.NaN;
+            double hp = h.value(i, PhysicalQuantity.HP);
+            double cas = casMean[i];
+            if (Double.isFinite(climb) && Double.isFinite(cas) && cas > 1.0) {
+                // ISA troposphere density ratio, 1 - 2.25577e-5 h (m) to the power 4.2559 (ICAO Doc 7488)
+                double sigma = Math.pow(Math.max(0.05, 1 - 2.25577e-5 * Math.min(Math.max(hp, 0), 11000)), 4.2559);
+                gamma[i] = Math.atan2(climb, cas / Math.sqrt(sigma));
+            } else {
+                gamma[i] = Double.NaN;
+            }
         }
     }
 
@@ -190,8 +237,6 @@ final class BoundaryRefiner {
         double p = h.value(i, PhysicalQuantity.P);
         double q = h.value(i, PhysicalQuantity.Q);
         double bank = h.value(i, PhysicalQuantity.ROLL);
-        double pitch = h.value(i, PhysicalQuantity.PITCH);
-        double aoa = h.value(i, PhysicalQuantity.AOA);
         if (Double.isFinite(p) && Math.abs(p) >= s.steadyRollRateRadS()) {
             return false;
         }
@@ -201,11 +246,7 @@ final class BoundaryRefiner {
         if (Double.isFinite(bank) && Math.abs(bank) >= s.steadyBankRad()) {
             return false;
         }
-        if (Double.isFinite(pitch) && Double.isFinite(aoa)) {
-            double gamma = pitch - aoa * (Double.isFinite(bank) ? Math.cos(bank) : 1.0);
-            return Math.abs(gamma) < s.steadyGammaRad();
-        }
-        return true;
+        return !Double.isFinite(gamma[i]) || Math.abs(gamma[i]) < s.steadyGammaRad();
     }
 
     /**
@@ -310,19 +351,27 @@ final class BoundaryRefiner {
         switch (kind) {
             case STALL_LEVEL:
             case STALL_TURN: {
-                int at = -1;
+                // the break: the first AoA maximum at least 4 deg (twice the stall rule's noise floor) above the
+                // lowest AoA before it, after which AoA falls by 4 deg and by a third of that rise (a stall lets go of
+                // much of its AoA; the nose coming up at the entry or a wobble on the way does not); a later pull-up's
+                // AoA peak is not a break
+                double low = Double.POSITIVE_INFINITY;
                 double best = Double.NEGATIVE_INFINITY;
-                for (int i = i0; i < ic; i++) {
+                double lowAtBest = Double.NaN;
+                int at = -1;
+                for (int i = i0; i < i1; i++) {
                     double a = h.value(i, PhysicalQuantity.AOA);
-                    if (Double.isFinite(a) && a > best) {
+                    if (!Double.isFinite(a)) {
+                        continue;
+                    }
+                    low = Math.min(low, a);
+                    if (i < ic && a > best) {
                         best = a;
                         at = i;
+                        lowAtBest = low;
                     }
-                }
-                // the break must be behind us: AoA down from its peak by 2 deg (the stall rule's noise floor)
-                for (int i = at + 1; at >= 0 && i < i1; i++) {
-                    double a = h.value(i, PhysicalQuantity.AOA);
-                    if (Double.isFinite(a) && a <= best - BREAK_FALL_RAD) {
+                    double rise = best - lowAtBest;
+                    if (at >= 0 && rise >= 2 * BREAK_FALL_RAD && a <= best - Math.max(2 * BREAK_FALL_RAD, rise / 3)) {
                         return at;
                     }
                 }

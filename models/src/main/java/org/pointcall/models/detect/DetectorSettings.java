@@ -117,12 +117,14 @@ public record DetectorSettings(Smoothing smoothing, double smoothingS, double en
      * Exponential smoothing over 0.3 s; enter above 0.6 for 0.5 s, leave below 0.35 for 0.75 s; edges at 0.25 on the
      * raw probability, debounced 0.2 s, moved at most 5 s; gaps up to 2 s merged; takeover margin 0.1; the switches
      * of {@link #defaultSwitches()}; minimum durations of {@link #defaultMinDurationsS()}; ticks more than 1 s apart
-     * restart the timing; every rule on with {@link GuardSettings#defaults()}.
+     * restart the timing; every guard rule on with {@link GuardSettings#defaults()}; every boundary rule on with
+     * {@link BoundarySettings#defaults()} but {@code accel-gain}, which is off: it holds only for an airframe with
+     * the power to sweep its speed (a level acceleration of the held-out airframe gained 2 % of CAS).
      */
     public static DetectorSettings defaults() {
         return new DetectorSettings(Smoothing.EXPONENTIAL, 0.3, 0.6, 0.5, 0.35, 0.75, 0.25, 0.2, 5.0, 2.0, 0.1,
-                defaultSwitches(), defaultMinDurationsS(), 1.0, Set.of(), GuardSettings.defaults(),
-                BoundarySettings.defaults());
+                defaultSwitches(), defaultMinDurationsS(), 1.0, Set.of(BoundaryRules.ACCEL_GAIN),
+                GuardSettings.defaults(), BoundarySettings.defaults());
     }
 
     /**
