@@ -657,6 +657,7 @@ public final class PointDetector implements Detector {
         ManoeuvreKind kind = classes.kind(k);
         long end = Math.max(endNs, beginNs);
         List<String> ev = new ArrayList<>();
+        long classifierS = end - classifierBeginNs;
         refineBoundaries(k, kind, now, end, capNs, ev);
         end = Math.max(refinedEndNs, beginNs);
         addFeatures(ev);
@@ -700,6 +701,13 @@ public final class PointDetector implements Detector {
             ev.add("failed " + duration);
         } else {
             ev.add("passed " + duration);
+        }
+        if ((accelerates[k] || holds[k]) && classifierS / 1e9 < minS) {
+            // an extent rule spreads a point over the state it found; the classifier's own stretch must still have
+            // lasted the minimum, or a short fragment in a long transit would become a point
+            ok = false;
+            ev.add("failed min-duration: " + String.format(Locale.ROOT, "%.2f s (needs %.2f s)", classifierS / 1e9,
+                    minS) + " as the classifier saw it");
         }
         List<KeyInstant> keys = new ArrayList<>();
         for (String name : GuardRules.namesFor(kind)) {
