@@ -31,6 +31,9 @@ final class BoundaryRefiner {
     /** Level acceleration: Nz off the level value by this, or a bank beyond this, ends the run. */
     private static final double ACCEL_END_NZ = 0.3;
     private static final double ACCEL_END_BANK_RAD = Math.toRadians(15);
+    /** ...and its foot, where Nz and bank were last near level. */
+    private static final double ACCEL_FOOT_NZ = 0.1;
+    private static final double ACCEL_FOOT_BANK_RAD = Math.toRadians(5);
     /** Stabilised hold: Hp within this of the point's mean (the 100 ft band usual for such points [memory]). */
     private static final double HOLD_HP_M = 50 * 0.3048;
     /** Stabilised hold: CAS within this fraction of the point's mean. */
@@ -340,7 +343,9 @@ final class BoundaryRefiner {
                 start = i;
             }
             if (ts[i] - ts[start] >= s.steadyDwellS()) {
-                return h.timeNs(i);
+                // a sideslip is flown steady: it is over when it is back at zero sideslip, wings level, which the
+                // dwell confirms; a stall, roll or wind-up turn is over once steady flight has been held
+                return kind == ManoeuvreKind.SIDESLIP ? h.timeNs(start) : h.timeNs(i);
             }
         }
         return NONE;
@@ -655,7 +660,20 @@ final class BoundaryRefiner {
                 best = v;
                 at = i;
             } else if (v < best - s.accelDropMps() || manoeuvre) {
-                return at < 0 ? NONE : h.timeNs(lastNear(at, i, best));
+                if (at < 0) {
+                    return NONE;
+                }
+                int end = lastNear(at, i, best);
+                if (manoeuvre) {
+                    // back to the foot of the pull or bank that ended the run
+                    int j = i;
+                    while (j > at && (term(j, 1) * s.departureNz() > ACCEL_FOOT_NZ
+                            || Math.abs(h.value(j, PhysicalQuantity.ROLL)) > ACCEL_FOOT_BANK_RAD)) {
+                        j--;
+                    }
+                    end = Math.min(end, j);
+                }
+                return h.timeNs(end);
             }
         }
         return NONE;
