@@ -29,7 +29,7 @@ final class BoundaryRefiner {
     /** The foot of a departure is looked for at most this far before its threshold crossing, s. */
     private static final double FOOT_S = 2.0;
     /** Level acceleration: Nz off the level value by this, or a bank beyond this, ends the run. */
-    private static final double ACCEL_END_NZ = 0.3;
+    private static final double ACCEL_END_NZ = 0.2;
     private static final double ACCEL_END_BANK_RAD = Math.toRadians(15);
     /** ...and its foot, where Nz and bank were last near level. */
     private static final double ACCEL_FOOT_NZ = 0.1;
@@ -307,6 +307,17 @@ final class BoundaryRefiner {
             }
         }
         if (best < 0) {
+            // straight on from the previous point: departed from its end to the classifier's begin, never quiet
+            if (floorNs != NONE && a == floorNs) {
+                int ib = h.indexAtOrAfter(beginNs);
+                boolean departed = ib > i0;
+                for (int j = i0; j < ib && departed; j++) {
+                    departed = dep[j] >= 1.0;
+                }
+                if (departed) {
+                    return h.timeNs(i0);
+                }
+            }
             return NONE;
         }
         // the foot of the rise of the term that departed first (others may sit below their thresholds anyway)
