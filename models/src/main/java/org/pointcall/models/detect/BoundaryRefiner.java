@@ -39,7 +39,6 @@ final class BoundaryRefiner {
     /** Stabilised hold: CAS within this fraction of the point's mean. */
     private static final double HOLD_CAS_FRACTION = 0.01;
 
-    private static final boolean DEBUG = Boolean.getBoolean("pointcall.debug");
     private final PhysicsHistory h;
     private final BoundarySettings s;
     private final double[] ts = new double[PhysicsHistory.CAPACITY];
@@ -296,11 +295,6 @@ final class BoundaryRefiner {
                 continue;
             }
             long dist = Math.abs(h.timeNs(j) - beginNs);
-            if (DEBUG) {
-                System.out.println("      cand " + h.timeNs(j) / 1e9 + " begin " + beginNs / 1e9 + " now " + nowNs / 1e9
-                        + " rate " + casRate[j] + " nz " + h.value(j, PhysicalQuantity.NZ) + " aos "
-                        + h.value(j, PhysicalQuantity.AOS) + " q " + qMean[j] + " p " + pMean[j]);
-            }
             if (dist < bestDist) {
                 bestDist = dist;
                 best = j;
