@@ -32,18 +32,21 @@ import org.pointcall.shared.kind.ManoeuvreKind;
  * @param switches           takeovers that change the open point's kind instead of ending it
  * @param minDurationS       shortest point per kind, every kind present; shorter ones are discarded
  * @param maxTickGapS        a longer silence between ticks restarts smoothing and entry timing
- * @param disabledRules      guard rules switched off, by name ({@link GuardRules#NAMES})
+ * @param disabledRules      guard and boundary rules switched off, by name ({@link GuardRules#NAMES},
+ *                           {@link BoundaryRules#NAMES})
  * @param guards             the guard rules' thresholds
+ * @param boundaries         the boundary rules' thresholds
  */
 public record DetectorSettings(Smoothing smoothing, double smoothingS, double enterProbability, double enterS,
                                double leaveProbability, double leaveS, double edgeProbability, double edgeDebounceS,
                                double maxRefineS, double mergeGapS, double switchMargin, Set<KindSwitch> switches,
                                Map<ManoeuvreKind, Double> minDurationS, double maxTickGapS, Set<String> disabledRules,
-                               GuardSettings guards) {
+                               GuardSettings guards, BoundarySettings boundaries) {
 
     public DetectorSettings {
         Objects.requireNonNull(smoothing, "smoothing");
         Objects.requireNonNull(guards, "guards");
+        Objects.requireNonNull(boundaries, "boundaries");
         List<String> bad = new ArrayList<>();
         if (smoothing != Smoothing.NONE && (!(smoothingS > 0) || Double.isInfinite(smoothingS))) {
             bad.add("smoothingS must be a positive number of seconds for " + smoothing + ", got " + smoothingS);
@@ -87,8 +90,10 @@ public record DetectorSettings(Smoothing smoothing, double smoothingS, double en
         Objects.requireNonNull(disabledRules, "disabledRules");
         Set<String> unknown = new TreeSet<>(disabledRules);
         unknown.removeAll(GuardRules.NAMES);
+        unknown.removeAll(BoundaryRules.NAMES);
         if (!unknown.isEmpty()) {
-            bad.add("disabledRules names unknown rules " + unknown + "; known: " + GuardRules.NAMES);
+            bad.add("disabledRules names unknown rules " + unknown + "; known: " + GuardRules.NAMES + " and "
+                    + BoundaryRules.NAMES);
         }
         disabledRules = Set.copyOf(disabledRules);
         if (!bad.isEmpty()) {
@@ -112,11 +117,14 @@ public record DetectorSettings(Smoothing smoothing, double smoothingS, double en
      * Exponential smoothing over 0.3 s; enter above 0.6 for 0.5 s, leave below 0.35 for 0.75 s; edges at 0.25 on the
      * raw probability, debounced 0.2 s, moved at most 5 s; gaps up to 2 s merged; takeover margin 0.1; the switches
      * of {@link #defaultSwitches()}; minimum durations of {@link #defaultMinDurationsS()}; ticks more than 1 s apart
-     * restart the timing; every rule on with {@link GuardSettings#defaults()}.
+     * restart the timing; every guard rule on with {@link GuardSettings#defaults()}; every boundary rule on with
+     * {@link BoundarySettings#defaults()} but {@code accel-gain}, which is off: it holds only for an airframe with
+     * the power to sweep its speed (a level acceleration of the held-out airframe gained 2 % of CAS).
      */
     public static DetectorSettings defaults() {
         return new DetectorSettings(Smoothing.EXPONENTIAL, 0.3, 0.6, 0.5, 0.35, 0.75, 0.25, 0.2, 5.0, 2.0, 0.1,
-                defaultSwitches(), defaultMinDurationsS(), 1.0, Set.of(), GuardSettings.defaults());
+                defaultSwitches(), defaultMinDurationsS(), 1.0, Set.of(BoundaryRules.ACCEL_GAIN),
+                GuardSettings.defaults(), BoundarySettings.defaults());
     }
 
     /**
@@ -138,8 +146,8 @@ public record DetectorSettings(Smoothing smoothing, double smoothingS, double en
      */
     public static Map<ManoeuvreKind, Double> defaultMinDurationsS() {
         Map<ManoeuvreKind, Double> m = new EnumMap<>(ManoeuvreKind.class);
-        m.put(ManoeuvreKind.STALL_LEVEL, 5.0);
-        m.put(ManoeuvreKind.STALL_TURN, 5.0);
+        m.put(ManoeuvreKind.STALL_LEVEL, 10.0);
+        m.put(ManoeuvreKind.STALL_TURN, 10.0);
         m.put(ManoeuvreKind.LOOP, 8.0);
         m.put(ManoeuvreKind.WIND_UP_TURN, 8.0);
         m.put(ManoeuvreKind.LEVEL_ACCEL, 15.0);
@@ -179,43 +187,43 @@ public record DetectorSettings(Smoothing smoothing, double smoothingS, double en
     public DetectorSettings withSmoothing(Smoothing s, double timeS) {
         return new DetectorSettings(s, timeS, enterProbability, enterS, leaveProbability, leaveS, edgeProbability,
                 edgeDebounceS, maxRefineS, mergeGapS, switchMargin, switches, minDurationS, maxTickGapS,
-                disabledRules, guards);
+                disabledRules, guards, boundaries);
     }
 
     public DetectorSettings withEnter(double probability, double holdS) {
         return new DetectorSettings(smoothing, smoothingS, probability, holdS, leaveProbability, leaveS,
                 edgeProbability, edgeDebounceS, maxRefineS, mergeGapS, switchMargin, switches, minDurationS,
-                maxTickGapS, disabledRules, guards);
+                maxTickGapS, disabledRules, guards, boundaries);
     }
 
     public DetectorSettings withLeave(double probability, double holdS) {
         return new DetectorSettings(smoothing, smoothingS, enterProbability, enterS, probability, holdS,
                 edgeProbability, edgeDebounceS, maxRefineS, mergeGapS, switchMargin, switches, minDurationS,
-                maxTickGapS, disabledRules, guards);
+                maxTickGapS, disabledRules, guards, boundaries);
     }
 
     public DetectorSettings withEdge(double probability, double debounceS, double maxRefine) {
         return new DetectorSettings(smoothing, smoothingS, enterProbability, enterS, leaveProbability, leaveS,
                 probability, debounceS, maxRefine, mergeGapS, switchMargin, switches, minDurationS, maxTickGapS,
-                disabledRules, guards);
+                disabledRules, guards, boundaries);
     }
 
     public DetectorSettings withMergeGapS(double s) {
         return new DetectorSettings(smoothing, smoothingS, enterProbability, enterS, leaveProbability, leaveS,
                 edgeProbability, edgeDebounceS, maxRefineS, s, switchMargin, switches, minDurationS, maxTickGapS,
-                disabledRules, guards);
+                disabledRules, guards, boundaries);
     }
 
     public DetectorSettings withSwitchMargin(double margin) {
         return new DetectorSettings(smoothing, smoothingS, enterProbability, enterS, leaveProbability, leaveS,
                 edgeProbability, edgeDebounceS, maxRefineS, mergeGapS, margin, switches, minDurationS, maxTickGapS,
-                disabledRules, guards);
+                disabledRules, guards, boundaries);
     }
 
     public DetectorSettings withSwitches(Set<KindSwitch> s) {
         return new DetectorSettings(smoothing, smoothingS, enterProbability, enterS, leaveProbability, leaveS,
                 edgeProbability, edgeDebounceS, maxRefineS, mergeGapS, switchMargin, s, minDurationS, maxTickGapS,
-                disabledRules, guards);
+                disabledRules, guards, boundaries);
     }
 
     public DetectorSettings withMinDurationS(ManoeuvreKind kind, double s) {
@@ -227,24 +235,30 @@ public record DetectorSettings(Smoothing smoothing, double smoothingS, double en
     public DetectorSettings withMinDurationsS(Map<ManoeuvreKind, Double> m) {
         return new DetectorSettings(smoothing, smoothingS, enterProbability, enterS, leaveProbability, leaveS,
                 edgeProbability, edgeDebounceS, maxRefineS, mergeGapS, switchMargin, switches, m, maxTickGapS,
-                disabledRules, guards);
+                disabledRules, guards, boundaries);
     }
 
     public DetectorSettings withMaxTickGapS(double s) {
         return new DetectorSettings(smoothing, smoothingS, enterProbability, enterS, leaveProbability, leaveS,
                 edgeProbability, edgeDebounceS, maxRefineS, mergeGapS, switchMargin, switches, minDurationS, s,
-                disabledRules, guards);
+                disabledRules, guards, boundaries);
     }
 
     public DetectorSettings withDisabledRules(Set<String> names) {
         return new DetectorSettings(smoothing, smoothingS, enterProbability, enterS, leaveProbability, leaveS,
                 edgeProbability, edgeDebounceS, maxRefineS, mergeGapS, switchMargin, switches, minDurationS,
-                maxTickGapS, names, guards);
+                maxTickGapS, names, guards, boundaries);
+    }
+
+    public DetectorSettings withBoundaries(BoundarySettings b) {
+        return new DetectorSettings(smoothing, smoothingS, enterProbability, enterS, leaveProbability, leaveS,
+                edgeProbability, edgeDebounceS, maxRefineS, mergeGapS, switchMargin, switches, minDurationS,
+                maxTickGapS, disabledRules, guards, b);
     }
 
     public DetectorSettings withGuards(GuardSettings g) {
         return new DetectorSettings(smoothing, smoothingS, enterProbability, enterS, leaveProbability, leaveS,
                 edgeProbability, edgeDebounceS, maxRefineS, mergeGapS, switchMargin, switches, minDurationS,
-                maxTickGapS, disabledRules, g);
+                maxTickGapS, disabledRules, g, boundaries);
     }
 }

@@ -36,6 +36,10 @@ public final class PointDetector implements Detector {
     private final int[] kindClasses;
     private final Hysteresis[] channel;
     private final Hysteresis[] edge;
+    /** Per kind, the lower entry of {@code physics-entry}: enough when the kind's live rules have passed. */
+    private final Hysteresis[] assist;
+    private final boolean[] assisted;
+    private boolean pointAssisted;
     private final GuardRule[][] rules;
     private final long[] candidateNs;
     private final double[] confSum;
@@ -52,6 +56,21 @@ public final class PointDetector implements Detector {
     private int historyNext;
     private int historySize;
     private final PhysicalState replay = new PhysicalState();
+    /** The recent states at 20 Hz for the boundary rules, and their work. */
+    private final PhysicsHistory physics = new PhysicsHistory();
+    private final BoundaryRefiner refiner;
+    private final boolean[] departs;
+    private final boolean[] recovers;
+    private final boolean[] accelerates;
+    private final boolean[] gains;
+    private final boolean[] holds;
+    private final long[] gapNs;
+    private final long recoveryWaitNs;
+    private final long accelWaitNs;
+    /** Checks for the physical end while a point waits for it, at most this often. */
+    private static final long END_CHECK_NS = 250_000_000L;
+    /** A manoeuvre's core (a stall's break) is looked for up to this long after the classifier's end, ns. */
+    private static final long CORE_AFTER_END_NS = 10_000_000_000L;
 
     private final long maxRefineNs;
     private final long mergeGapNs;
@@ -65,6 +84,12 @@ public final class PointDetector implements Detector {
     private long lastEndNs = NONE;
 
     private int phase = IDLE;
+    /** The open point has left and waits for its physical end (boundary rules). */
+    private boolean waiting;
+    private long lastEndCheckNs;
+    private long physicalEndNs;
+    /** The open point's begin as the classifier placed it, where the boundary rules look from. */
+    private long classifierBeginNs;
     private int pointClass = -1;
     private long pointId;
     private long beginNs;
@@ -99,6 +124,8 @@ public final class PointDetector implements Detector {
         this.smoothed = new double[n];
         this.channel = new Hysteresis[n];
         this.edge = new Hysteresis[n];
+        this.assist = new Hysteresis[n];
+        this.assisted = new boolean[n];
         this.rules = new GuardRule[n][];
         this.candidateNs = new long[n];
         this.confSum = new double[n];
@@ -125,12 +152,41 @@ public final class PointDetector implements Detector {
             edge[c] = new Hysteresis(settings.edgeProbability(), settings.edgeDebounceS(),
                     settings.edgeProbability(), settings.edgeDebounceS());
             rules[c] = GuardRules.forKind(k, settings);
+            BoundarySettings bs = settings.boundaries();
+            assist[c] = new Hysteresis(bs.assistEnterProbability(), settings.enterS(), bs.assistLeaveProbability(),
+                    settings.leaveS());
+            assisted[c] = BoundaryRules.applies(BoundaryRules.PHYSICS_ENTRY, k, settings);
         }
         this.maxRefineNs = Math.round(settings.maxRefineS() * 1e9);
         this.mergeGapNs = Math.round(settings.mergeGapS() * 1e9);
         this.maxTickGapNs = Math.round(settings.maxTickGapS() * 1e9);
         this.edgeProbability = settings.edgeProbability();
         this.switchMargin = settings.switchMargin();
+        this.refiner = new BoundaryRefiner(physics, settings.boundaries());
+        this.departs = new boolean[n];
+        this.recovers = new boolean[n];
+        this.accelerates = new boolean[n];
+        this.gains = new boolean[n];
+        this.holds = new boolean[n];
+        this.gapNs = new long[n];
+        long fragmentNs = Math.round(settings.boundaries().fragmentGapS() * 1e9);
+        for (int c = 0; c < n; c++) {
+            ManoeuvreKind k = classes.kind(c);
+            gapNs[c] = mergeGapNs;
+            if (k == null) {
+                continue;
+            }
+            departs[c] = BoundaryRules.applies(BoundaryRules.BEGIN_DEPARTURE, k, settings);
+            recovers[c] = BoundaryRules.applies(BoundaryRules.END_RECOVERY, k, settings);
+            accelerates[c] = BoundaryRules.applies(BoundaryRules.ACCEL_EXTENT, k, settings);
+            gains[c] = BoundaryRules.applies(BoundaryRules.ACCEL_GAIN, k, settings);
+            holds[c] = BoundaryRules.applies(BoundaryRules.STABILISED_EXTENT, k, settings);
+            if (BoundaryRules.applies(BoundaryRules.FRAGMENT_MERGE, k, settings)) {
+                gapNs[c] = Math.max(mergeGapNs, fragmentNs);
+            }
+        }
+        this.recoveryWaitNs = Math.round(settings.boundaries().recoveryWaitS() * 1e9);
+        this.accelWaitNs = Math.round(settings.boundaries().accelWaitS() * 1e9);
         resetRun(NONE);
     }
 
@@ -151,8 +207,10 @@ public final class PointDetector implements Detector {
         lastFrameNs = NONE;
         lastEndNs = NONE;
         phase = IDLE;
+        waiting = false;
         pointClass = -1;
         pointId = 0;
+        physics.clear();
         featureCount = 0;
         switchNote = null;
         smoother.reset();
@@ -161,6 +219,7 @@ public final class PointDetector implements Detector {
         historySize = 0;
         for (int c : kindClasses) {
             channel[c].reset();
+            assist[c].reset();
             edge[c].reset();
             candidateNs[c] = NONE;
             restart(c, NONE);
@@ -176,6 +235,7 @@ public final class PointDetector implements Detector {
         }
         lastFrameNs = t;
         binder.fill(frame, state);
+        physics.add(state);
         historyNs[historyNext] = t;
         state.copyTo(historyValues, historySampledNs, historyNext * PhysicalQuantity.COUNT);
         historyNext = (historyNext + 1) % HISTORY_FRAMES;
@@ -221,6 +281,7 @@ public final class PointDetector implements Detector {
         smoother.smooth(timeNs, p, smoothed);
         for (int c : kindClasses) {
             channel[c].update(timeNs, smoothed[c]);
+            assist[c].update(timeNs, smoothed[c]);
             edge[c].update(timeNs, p[c]);
             boolean owned = phase != IDLE && c == pointClass;
             if (!owned) {
@@ -284,6 +345,7 @@ public final class PointDetector implements Detector {
         for (int c : kindClasses) {
             if (phase == IDLE || c != pointClass) {
                 channel[c].reset();
+                assist[c].reset();
                 edge[c].reset();
             }
         }
@@ -299,7 +361,7 @@ public final class PointDetector implements Detector {
         }
         int k = pointClass;
         if (phase == ACTIVE) {
-            if (channel[k].isOn()) {
+            if (gate(k).isOn()) {
                 int j = strongestOn(k);
                 if (j >= 0 && smoothed[j] > smoothed[k] + switchMargin) {
                     takeOver(k, j, now, top);
@@ -309,15 +371,18 @@ public final class PointDetector implements Detector {
                 return;
             }
             phase = CLOSING;
-            leaveNs = channel[k].edgeNs();
+            leaveNs = gate(k).edgeNs();
             endEstimateNs = fallEstimate(k);
         }
-        if (channel[k].isOn()) {
-            if (channel[k].edgeNs() - leaveNs <= mergeGapNs) {
+        if (gate(k).isOn()) {
+            if (gate(k).edgeNs() - leaveNs <= gapNs[k] || waiting) {
+                // back within the gap, or while the point still waited for its physical end: the same point
                 phase = ACTIVE;
+                waiting = false;
+                physicalEndNs = NONE;
                 merges++;
             } else {
-                close(now, endEstimateNs, null);
+                close(now, endEstimateNs, null, NONE);
                 begin(k, now, top);
             }
             return;
@@ -327,23 +392,105 @@ public final class PointDetector implements Detector {
             endEstimateNs = fallEstimate(k);
         }
         int j = strongestOn(k);
+        if (j >= 0 && recovers[k] && settings.allowsSwitch(classes.kind(k), classes.kind(j))) {
+            // a kind the closing point may become, while it still waits for its physical end: the same manoeuvre
+            // seen again (a turning stall lost before its break, its recovery called a stall)
+            switchWhileClosing(k, j, now, top);
+            return;
+        }
         if (j >= 0) {
-            close(now, endEstimateNs, null);
+            close(now, endEstimateNs, null, riseEstimate(j));
             begin(j, now, top);
             return;
         }
-        long rising = channel[k].pendingNs();
-        boolean riseInGap = rising != NONE && rising - leaveNs <= mergeGapNs;
-        if (now - leaveNs > mergeGapNs && !riseInGap) {
-            close(now, endEstimateNs, null);
+        long rising = gate(k).pendingNs();
+        boolean riseInGap = rising != NONE && rising - leaveNs <= gapNs[k];
+        if (now - leaveNs > gapNs[k] && !riseInGap) {
+            if (!physicalEndKnown(k, now)) {
+                waiting = true;
+                return;
+            }
+            close(now, endEstimateNs, null, NONE);
         }
+    }
+
+    /**
+     * For a kind whose end a boundary rule places: true once that end has been seen (kept in physicalEndNs), or the
+     * wait for it is over; true at once for other kinds. Checked at most every {@link #END_CHECK_NS}.
+     */
+    private boolean physicalEndKnown(int k, long now) {
+        if (!recovers[k] && !accelerates[k] && !holds[k]) {
+            return true;
+        }
+        long wait = recovers[k] ? recoveryWaitNs : accelWaitNs;
+        if (now - endEstimateNs > wait || !refiner.canPlaceEnd(classes.kind(k))) {
+            return true;
+        }
+        if (waiting && now - lastEndCheckNs < END_CHECK_NS) {
+            return false;
+        }
+        lastEndCheckNs = now;
+        physicalEndNs = physicalEnd(k, now);
+        return physicalEndNs != NONE;
+    }
+
+    /** The end a boundary rule places for kind {@code k}'s open point, seen by {@code now}; NONE if none yet. */
+    private long physicalEnd(int k, long now) {
+        if (accelerates[k]) {
+            return refiner.accelEnd(beginNs, now);
+        }
+        if (holds[k]) {
+            return refiner.holdEnd(beginNs, endEstimateNs, now);
+        }
+        return refiner.recoveryEnd(classes.kind(k), beginNs, endEstimateNs + CORE_AFTER_END_NS, now);
+    }
+
+    /**
+     * The begin-departure search's anchor: the classifier's begin, or for a stall the start of the steady slowing
+     * that holds it (the classifier may rise late in a long entry).
+     */
+    private long departureAnchor(int c, long b) {
+        ManoeuvreKind k = classes.kind(c);
+        if (k == ManoeuvreKind.STALL_LEVEL || k == ManoeuvreKind.STALL_TURN) {
+            long d = refiner.decelBegin(b, lastEndNs);
+            if (d != NONE) {
+                return d;
+            }
+        }
+        return b;
+    }
+
+    /** The switch that keeps the open point on: its channel, or the lower one it entered by with its rules. */
+    private Hysteresis gate(int k) {
+        return pointAssisted ? assist[k] : channel[k];
+    }
+
+    /** Kind {@code c} has entered: its channel is on, or its lower one with every live rule of it passed. */
+    private boolean entered(int c) {
+        if (channel[c].isOn()) {
+            return true;
+        }
+        if (!assisted[c] || !assist[c].isOn() || candidateNs[c] == NONE) {
+            return false;
+        }
+        GuardRule[] rs = rules[c];
+        boolean any = false;
+        for (int r = 0; r < rs.length; r++) {
+            if (rs[r].confirmsLive()) {
+                if (rs[r].liveOutcome() != RuleOutcome.PASSED) {
+                    return false;
+                }
+                any = true;
+            }
+        }
+        return any;
     }
 
     /** The class with its channel on and the highest smoothed probability, other than {@code except}; or -1. */
     private int strongestOn(int except) {
         int best = -1;
         for (int c : kindClasses) {
-            if (c != except && channel[c].isOn() && (best < 0 || smoothed[c] > smoothed[best])) {
+            if (c != except && entered(c) && (best < 0 || smoothed[c] > smoothed[best])) {
                 best = c;
             }
         }
@@ -362,7 +509,7 @@ public final class PointDetector implements Detector {
 
     /** Where the raw probability of class {@code c} rose above the edge, within reach of its entry. */
     private long riseEstimate(int c) {
-        long anchor = channel[c].edgeNs();
+        long anchor = (channel[c].isOn() ? channel[c] : assist[c]).edgeNs();
         long rise = edge[c].riseNs();
         if (rise == NONE || rise > anchor) {
             rise = anchor;
@@ -375,11 +522,23 @@ public final class PointDetector implements Detector {
         if (lastEndNs != NONE) {
             b = Math.max(b, lastEndNs);
         }
+        classifierBeginNs = b;
+        pointAssisted = !channel[c].isOn();
+        String moved = null;
+        long physical = departs[c] ? refiner.departureBegin(departureAnchor(c, b), lastEndNs, now)
+                : accelerates[c] ? refiner.accelBegin(b, lastEndNs) : NONE;
+        if (physical != NONE && physical <= now) {
+            moved = "begin at " + (departs[c] ? BoundaryRules.BEGIN_DEPARTURE : BoundaryRules.ACCEL_EXTENT) + " "
+                    + seconds(physical) + " s, the classifier's " + seconds(b) + " s";
+            b = physical;
+        }
         if (candidateNs[c] == NONE) {
             restart(c, b);
         }
         pointId++;
         phase = ACTIVE;
+        waiting = false;
+        physicalEndNs = NONE;
         pointClass = c;
         beginNs = b;
         begunAtNs = now;
@@ -396,6 +555,14 @@ public final class PointDetector implements Detector {
         addFeatures(ev);
         ev.add("entered: smoothed p(" + classes.name(c) + ") above " + settings.enterProbability() + " for "
                 + settings.enterS() + " s from " + seconds(channel[c].edgeNs()) + " s");
+        if (pointAssisted) {
+            ev.set(ev.size() - 1, "entered: smoothed p(" + classes.name(c) + ") above "
+                    + settings.boundaries().assistEnterProbability() + " for " + settings.enterS() + " s from "
+                    + seconds(assist[c].edgeNs()) + " s, with its rules passed (" + BoundaryRules.PHYSICS_ENTRY + ")");
+        }
+        if (moved != null) {
+            ev.add(moved);
+        }
         emit(PointEvent.Type.BEGUN, now, NONE, List.of(), ev, liveConfidence(c));
     }
 
@@ -403,6 +570,7 @@ public final class PointDetector implements Detector {
         ManoeuvreKind from = classes.kind(k);
         ManoeuvreKind to = classes.kind(j);
         channel[k].reset();
+        assist[k].reset();
         candidateNs[k] = NONE;
         if (settings.allowsSwitch(from, to)) {
             String note = "switched from " + from.key() + " to " + to.key() + " at " + seconds(now) + " s";
@@ -421,8 +589,33 @@ public final class PointDetector implements Detector {
         long jBegin = riseEstimate(j);
         long f = edge[k].fallNs();
         long end = f != NONE && f >= beginNs ? Math.min(f, jBegin) : jBegin;
-        close(now, Math.max(end, beginNs), "ended when " + to.key() + " took over");
+        close(now, Math.max(end, beginNs), "ended when " + to.key() + " took over", jBegin);
         begin(j, now, top);
+    }
+
+    private void switchWhileClosing(int k, int j, long now, String[] top) {
+        ManoeuvreKind from = classes.kind(k);
+        ManoeuvreKind to = classes.kind(j);
+        String note = "switched from " + from.key() + " to " + to.key() + " at " + seconds(now)
+                + " s while waiting for its end";
+        switchNote = switchNote == null ? note : switchNote + "; " + note;
+        channel[k].reset();
+        assist[k].reset();
+        candidateNs[k] = NONE;
+        phase = ACTIVE;
+        waiting = false;
+        physicalEndNs = NONE;
+        merges++;
+        pointClass = j;
+        pointAssisted = !channel[j].isOn();
+        confirmed = false;
+        if (candidateNs[j] == NONE) {
+            restart(j, now);
+        }
+        List<String> ev = new ArrayList<>();
+        addFeatures(ev);
+        ev.add(switchNote);
+        emit(PointEvent.Type.REFINED, now, NONE, List.of(), ev, liveConfidence(j));
     }
 
     private void confirmIfReady(long now) {
@@ -455,12 +648,18 @@ public final class PointDetector implements Detector {
         emit(PointEvent.Type.REFINED, now, NONE, keys, ev, liveConfidence(pointClass));
     }
 
-    /** Ends the open point at {@code endNs}, judges it and says ENDED or DISCARDED. */
-    private void close(long now, long endNs, String note) {
+    /**
+     * Ends the open point at {@code endNs} (or where a boundary rule places it, not after {@code capNs} unless that
+     * is NONE), judges it and says ENDED or DISCARDED.
+     */
+    private void close(long now, long endNs, String note, long capNs) {
         int k = pointClass;
         ManoeuvreKind kind = classes.kind(k);
         long end = Math.max(endNs, beginNs);
         List<String> ev = new ArrayList<>();
+        long classifierS = end - classifierBeginNs;
+        refineBoundaries(k, kind, now, end, capNs, ev);
+        end = Math.max(refinedEndNs, beginNs);
         addFeatures(ev);
         if (switchNote != null) {
             ev.add(switchNote);
@@ -480,6 +679,20 @@ public final class PointDetector implements Detector {
             }
         }
         boolean ok = true;
+        if (gains[k]) {
+            double gain = refiner.speedGain(beginNs, end);
+            String line = BoundaryRules.ACCEL_GAIN + ": CAS gained " + String.format(Locale.ROOT, "%.1f", 100 * gain)
+                    + " % (needs " + String.format(Locale.ROOT, "%.1f", 100 * settings.boundaries().accelGain())
+                    + " %)";
+            if (Double.isNaN(gain)) {
+                ev.add("unchecked " + BoundaryRules.ACCEL_GAIN + ": no CAS");
+            } else if (gain < settings.boundaries().accelGain()) {
+                ok = false;
+                ev.add("failed " + line);
+            } else {
+                ev.add("passed " + line);
+            }
+        }
         double durationS = (end - beginNs) / 1e9;
         double minS = settings.minDurationS(kind);
         String duration = "min-duration: " + String.format(Locale.ROOT, "%.2f s (needs %.2f s)", durationS, minS);
@@ -488,6 +701,13 @@ public final class PointDetector implements Detector {
             ev.add("failed " + duration);
         } else {
             ev.add("passed " + duration);
+        }
+        if ((accelerates[k] || holds[k]) && classifierS / 1e9 < minS) {
+            // an extent rule spreads a point over the state it found; the classifier's own stretch must still have
+            // lasted the minimum, or a short fragment in a long transit would become a point
+            ok = false;
+            ev.add("failed min-duration: " + String.format(Locale.ROOT, "%.2f s (needs %.2f s)", classifierS / 1e9,
+                    minS) + " as the classifier saw it");
         }
         List<KeyInstant> keys = new ArrayList<>();
         for (String name : GuardRules.namesFor(kind)) {
@@ -519,6 +739,8 @@ public final class PointDetector implements Detector {
             ev.add(note);
         }
         double conf = keptCount[k] > 0 ? keptSum[k] / keptCount[k] : liveConfidence(k);
+        int told = stallByBank(k, kind, end, ev);
+        pointClass = told;
         emit(ok ? PointEvent.Type.ENDED : PointEvent.Type.DISCARDED, now, end, keys, ev, conf);
         if (ok) {
             lastEndNs = end;
@@ -529,14 +751,86 @@ public final class PointDetector implements Detector {
         restart(k, candidateNs[k]);
     }
 
+    private long refinedEndNs;
+
+    /**
+     * {@code stall-bank}: a stall is a turning one when the bank held on its way to the break (median |bank| from
+     * the begin to the AoA maximum) is beyond the settings' bank, else a wings-level one; the class to report.
+     */
+    private int stallByBank(int k, ManoeuvreKind kind, long end, List<String> ev) {
+        if (!(kind == ManoeuvreKind.STALL_LEVEL || kind == ManoeuvreKind.STALL_TURN)
+                || !BoundaryRules.applies(BoundaryRules.STALL_BANK, kind, settings)) {
+            return k;
+        }
+        double bank = refiner.bankToBreak(beginNs, end);
+        if (Double.isNaN(bank)) {
+            return k;
+        }
+        ManoeuvreKind told = bank >= settings.boundaries().turnBankRad() ? ManoeuvreKind.STALL_TURN
+                : ManoeuvreKind.STALL_LEVEL;
+        int c = classes.indexOf(told);
+        if (c < 0) {
+            return k;
+        }
+        ev.add(BoundaryRules.STALL_BANK + ": median bank to the break " + GuardRule.deg(bank) + " deg (turning from "
+                + GuardRule.deg(settings.boundaries().turnBankRad()) + "): " + told.key()
+                + (told == kind ? "" : ", was " + kind.key()));
+        return c;
+    }
+
+    /**
+     * The boundary rules: the end where the physics says the point was over (found while waiting, or now), the begin
+     * where the aircraft departed its steady entry; sets refinedEndNs and moves beginNs, with evidence.
+     */
+    private void refineBoundaries(int k, ManoeuvreKind kind, long now, long end, long capNs, List<String> ev) {
+        refinedEndNs = end;
+        if (recovers[k] || accelerates[k] || holds[k]) {
+            String rule = accelerates[k] ? BoundaryRules.ACCEL_EXTENT
+                    : holds[k] ? BoundaryRules.STABILISED_EXTENT : BoundaryRules.END_RECOVERY;
+            long e = physicalEndNs;
+            if (e == NONE) {
+                long keep = endEstimateNs;
+                endEstimateNs = end;
+                e = physicalEnd(k, now);
+                endEstimateNs = keep;
+            }
+            if (e != NONE && capNs != NONE) {
+                e = Math.min(e, capNs);
+            }
+            if (e != NONE && e > beginNs) {
+                ev.add("end moved to " + rule + " at " + seconds(e) + " s from " + seconds(end) + " s");
+                if (e > end && recovers[k]) {
+                    // the rules judge everything seen up to the recovery, not only the classifier's stretch (a
+                    // turning stall the classifier lost before its break)
+                    for (GuardRule r : rules[k]) {
+                        r.mark();
+                    }
+                }
+                refinedEndNs = e;
+            } else {
+                ev.add("kept end: " + rule + " found no physical end");
+            }
+        }
+        if (departs[k] || accelerates[k]) {
+            String rule = departs[k] ? BoundaryRules.BEGIN_DEPARTURE : BoundaryRules.ACCEL_EXTENT;
+            long b = departs[k] ? refiner.departureBegin(departureAnchor(k, classifierBeginNs), lastEndNs, now)
+                    : refiner.accelBegin(classifierBeginNs, lastEndNs);
+            if (b != NONE && b != beginNs && b < refinedEndNs && (lastEndNs == NONE || b >= lastEndNs)) {
+                ev.add("begin moved to " + rule + " at " + seconds(b) + " s from " + seconds(beginNs) + " s");
+                beginNs = b;
+            }
+        }
+        waiting = false;
+    }
+
     @Override
     public void finish(long timeNs) {
         long now = lastTickNs == NONE ? timeNs : Math.max(timeNs, lastTickNs);
         if (phase == ACTIVE) {
             long f = edge[pointClass].fallNs();
-            close(now, f != NONE && f >= beginNs ? f : now, "ended by finish");
+            close(now, f != NONE && f >= beginNs ? f : now, "ended by finish", NONE);
         } else if (phase == CLOSING) {
-            close(now, endEstimateNs, "ended by finish");
+            close(now, endEstimateNs, "ended by finish", NONE);
         }
         resetRun(NONE);
         floorNs = now;

@@ -25,6 +25,7 @@ public final class Evaluation {
     private final EventScore events;
     private final long ticks;
     private final long classifierNs;
+    private final long detectorNs;
 
     private Evaluation(List<SortieResult> sorties) {
         this.sorties = List.copyOf(sorties);
@@ -39,6 +40,7 @@ public final class Evaluation {
         int at = 0;
         double offset = 0;
         long ns = 0;
+        long det = 0;
         for (SortieResult s : this.sorties) {
             System.arraycopy(s.truthClass(), 0, truth, at, s.ticks());
             System.arraycopy(s.predictedClass(), 0, predicted, at, s.ticks());
@@ -52,11 +54,13 @@ public final class Evaluation {
             }
             offset += s.spanEndS() - s.spanBeginS();
             ns += s.classifierNs();
+            det += s.detectorNs();
         }
         this.rows = ClassConfusion.of(truth, predicted, LabelledRows.CLASS_NAMES);
         this.events = EventScoring.score(tp, dp, 0, offset);
         this.ticks = n;
         this.classifierNs = ns;
+        this.detectorNs = det;
     }
 
     /** Aggregates sorties already run. */
@@ -82,6 +86,11 @@ public final class Evaluation {
     /** Mean classifier time per decision tick, ns, measured on the run's own ticks. */
     public double classifierNsPerTick() {
         return ticks == 0 ? Double.NaN : classifierNs / (double) ticks;
+    }
+
+    /** Mean detector time per decision tick (its frames' physics included), ns, measured on the run's own ticks. */
+    public double detectorNsPerTick() {
+        return ticks == 0 ? Double.NaN : detectorNs / (double) ticks;
     }
 
     /** The confusion matrix as a table (truth down, predicted across), classes with no row and no prediction left out. */
@@ -134,6 +143,7 @@ public final class Evaluation {
         out.addAll(events.lines());
         out.add("events.discarded: " + discarded);
         out.add("cost.classifier-ns-per-tick: " + String.format(Locale.ROOT, "%.0f", classifierNsPerTick()));
+        out.add("cost.detector-ns-per-tick: " + String.format(Locale.ROOT, "%.0f", detectorNsPerTick()));
         return out;
     }
 }

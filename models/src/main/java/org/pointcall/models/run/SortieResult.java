@@ -19,12 +19,14 @@ import org.pointcall.models.metrics.TruePoint;
  * @param spanBeginS      first frame, s of the recording's time line
  * @param spanEndS        last frame, s
  * @param classifierNs    time spent in the classifier over all ticks, ns (wall clock of this thread)
+ * @param detectorNs      time spent in the point detector (its physics per frame, its decisions per tick and the
+ *                        boundary rules), ns, the same way
  * @param framesRead      frames the reader delivered
  * @param rowsSkipped     rows of the recording the reader skipped
  */
 public record SortieResult(String name, String airframe, List<TruePoint> truth, List<DetectedPoint> detected,
                            int discarded, int[] truthClass, int[] predictedClass, double spanBeginS, double spanEndS,
-                           long classifierNs, long framesRead, long rowsSkipped) {
+                           long classifierNs, long detectorNs, long framesRead, long rowsSkipped) {
     public SortieResult {
         Objects.requireNonNull(name, "name");
         airframe = airframe == null ? "" : airframe;

@@ -18,6 +18,7 @@ import org.pointcall.ingest.window.FeatureExtractor;
 import org.pointcall.models.data.DatasetBuilder;
 import org.pointcall.models.data.LabelledRows;
 import org.pointcall.models.detect.ClassLayout;
+import org.pointcall.models.detect.DetectorListener;
 import org.pointcall.models.detect.DetectorSettings;
 import org.pointcall.models.detect.PointDetector;
 import org.pointcall.models.detect.PointEvent;
@@ -46,6 +47,7 @@ public final class StreamingScorer {
     private final ModelDescription model;
     private final ParameterDictionary dictionary;
     private final DetectorSettings detectorSettings;
+    private DetectorListener watcher;
 
     /**
      * @throws PointcallException when the dictionary lacks a parameter the model needs, carries one in a unit of
@@ -69,6 +71,15 @@ public final class StreamingScorer {
                         + "; converting features is not supported here");
             }
         }
+    }
+
+    /**
+     * Also gives every detector event (BEGUN, REFINED, ENDED, DISCARDED) to {@code listener}, on the scoring thread,
+     * for a closer look at how points were decided; null for none.
+     */
+    public StreamingScorer watchEvents(DetectorListener listener) {
+        this.watcher = listener;
+        return this;
     }
 
     /** A simulated sortie's folder: {@code sortie.csv} labelled by {@code truth.json}. */
@@ -109,7 +120,7 @@ public final class StreamingScorer {
         }
         return new SortieResult(name, airframe, TruePoint.fromLabels(aligned), run.detected, run.discarded,
                 truthClass, Arrays.copyOf(run.predicted, run.ticks), Units.nsToSeconds(run.firstFrameNs),
-                Units.nsToSeconds(run.lastFrameNs), run.classifierNs, read.framesDelivered(), read.rowsSkipped());
+                Units.nsToSeconds(run.lastFrameNs), run.classifierNs, run.detectorNs, read.framesDelivered(), read.rowsSkipped());
     }
 
     /** One recording's pipeline and what it has produced so far. */
@@ -124,6 +135,7 @@ public final class StreamingScorer {
         int[] predicted = new int[4096];
         int ticks;
         long classifierNs;
+        long detectorNs;
         long frames;
         long firstFrameNs;
         long lastFrameNs;
@@ -146,12 +158,14 @@ public final class StreamingScorer {
             currentFrameNs = f.timeNs();
             derived.apply(f);
             extractor.onFrame(f);
+            long t0 = System.nanoTime();
             detector.onFrame(f);
             // a tick at this frame's own instant fired inside the extractor; the detector gets it after the frame
             if (pending) {
                 pending = false;
                 detector.onTick(pendingNs, posterior);
             }
+            detectorNs += System.nanoTime() - t0;
         }
 
         void onFeatures(long timeNs, double[] features, boolean[] valid, double[] coverage) {
@@ -169,11 +183,16 @@ public final class StreamingScorer {
                 pending = true;
                 pendingNs = timeNs;
             } else {
+                long t1 = System.nanoTime();
                 detector.onTick(timeNs, posterior);
+                detectorNs += System.nanoTime() - t1;
             }
         }
 
         void onEvent(PointEvent e) {
+            if (watcher != null) {
+                watcher.onPointEvent(e);
+            }
             switch (e.type()) {
                 // begunAtNs is the BEGUN event's reportedAtNs: the live report of the point
                 case ENDED -> detected.add(new DetectedPoint(e.kind(), Units.nsToSeconds(e.beginNs()),

@@ -71,7 +71,9 @@ class PointDetectorTest {
 
     @Test
     void aDipShorterThanTheMergeGapDoesNotSplitThePoint() {
-        DetectorSettings st = DetectorSettings.defaults().withMinDurationS(ManoeuvreKind.LEVEL_ACCEL, 5.0);
+        // the base merge gap alone: the longer fragment-merge gap of long kinds is tested apart
+        DetectorSettings st = DetectorSettings.defaults().withMinDurationS(ManoeuvreKind.LEVEL_ACCEL, 5.0)
+                .withDisabledRules(Set.of(BoundaryRules.FRAGMENT_MERGE));
         // 1.2 s at 0.05: long enough for the smoothed probability to stay under p_off past t_off (the point leaves),
         // short enough for the re-entry to begin within the 2 s merge gap
         SyntheticSortie s = run(st, 60, 3L, new Bump(ManoeuvreKind.LEVEL_ACCEL, 10, 25, 0.9),
@@ -93,7 +95,8 @@ class PointDetectorTest {
 
     @Test
     void aDipLongerThanTheMergeGapSplitsThePoint() {
-        DetectorSettings st = DetectorSettings.defaults().withMinDurationS(ManoeuvreKind.LEVEL_ACCEL, 5.0);
+        DetectorSettings st = DetectorSettings.defaults().withMinDurationS(ManoeuvreKind.LEVEL_ACCEL, 5.0)
+                .withDisabledRules(Set.of(BoundaryRules.FRAGMENT_MERGE));
         SyntheticSortie s = run(st, 60, 4L, new Bump(ManoeuvreKind.LEVEL_ACCEL, 10, 25, 0.9),
                 new Bump(ManoeuvreKind.LEVEL_ACCEL, 28, 40, 0.9));
         assertEquals(List.of(BEGUN, ENDED, BEGUN, ENDED), s.types());
@@ -105,7 +108,7 @@ class PointDetectorTest {
         SyntheticSortie s = run(DetectorSettings.defaults(), 30, 5L, new Bump(ManoeuvreKind.STALL_LEVEL, 10, 13, 0.9));
         assertEquals(List.of(BEGUN, DISCARDED), s.types());
         PointEvent d = s.onlyFinal();
-        assertTrue(d.hasEvidence("failed min-duration: 3.00 s (needs 5.00 s)"), d.evidence()::toString);
+        assertTrue(d.hasEvidence("failed min-duration: 3.00 s (needs 10.00 s)"), d.evidence()::toString);
         assertTrue(d.hasEvidence("unchecked stall-aoa-peak"), "no physics, so the rule could not judge");
         // a shorter minimum keeps it
         SyntheticSortie kept = run(DetectorSettings.defaults().withMinDurationS(ManoeuvreKind.STALL_LEVEL, 2.5), 30, 5L,

@@ -28,7 +28,8 @@ class SettingsAndBindingTest {
         md.remove(ManoeuvreKind.PHUGOID);
         PointcallException e = assertThrows(PointcallException.class, () -> new DetectorSettings(d.smoothing(),
                 -1, 0.3, d.enterS(), 0.5, d.leaveS(), 0.6, d.edgeDebounceS(), d.maxRefineS(), d.mergeGapS(),
-                d.switchMargin(), d.switches(), md, d.maxTickGapS(), Set.of("loop-pitch-45"), d.guards()));
+                d.switchMargin(), d.switches(), md, d.maxTickGapS(), Set.of("loop-pitch-45"), d.guards(),
+                d.boundaries()));
         String m = e.getMessage();
         assertTrue(m.contains("smoothingS must be a positive number"), m);
         assertTrue(m.contains("leaveProbability (0.5) must be below enterProbability (0.3)"), m);

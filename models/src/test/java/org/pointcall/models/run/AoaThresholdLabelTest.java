@@ -20,6 +20,7 @@ import org.pointcall.ingest.window.WindowSpec;
 import org.pointcall.models.data.DatasetBuilder;
 import org.pointcall.models.data.LabelledRows;
 import org.pointcall.models.data.SortieInfo;
+import org.pointcall.models.detect.BoundaryRules;
 import org.pointcall.models.detect.DetectorSettings;
 import org.pointcall.models.label.LabelFiles;
 import org.pointcall.models.label.Labels;
@@ -115,7 +116,11 @@ class AoaThresholdLabelTest {
 
         Path unseen = sorties.get(3).resolve(DatasetBuilder.SIM_RECORDING);
         Labels truth = labels.get(3);
-        SortieResult r = new StreamingScorer(run.classifier(), model, dict, DetectorSettings.defaults())
+        // these labels say where AoA is past a threshold, not where the technique began and the aircraft was back in
+        // steady flight: the boundary rules that place a stall's begin and end by the latter are switched off
+        DetectorSettings own = DetectorSettings.defaults().withDisabledRules(java.util.Set.of(
+                BoundaryRules.BEGIN_DEPARTURE, BoundaryRules.END_RECOVERY));
+        SortieResult r = new StreamingScorer(run.classifier(), model, dict, own)
                 .score(unseen, truth, "own-3", "veskarn-02");
         List<DetectedPoint> stalls = r.detected().stream().filter(d -> d.kind() == ManoeuvreKind.STALL_LEVEL)
                 .toList();

@@ -113,7 +113,7 @@ class TrainEvaluateCommandTest {
                 "rows.none.recall", "rows.aileron-roll.recall", "events.f1", "events.precision", "events.recall",
                 "events.aileron-roll.f1", "events.sideslip.f1", "events.begin-error.abs-median-s",
                 "events.end-error.abs-p95-s", "events.live-begin-latency.p95-s", "events.false-points-per-hour",
-                "cost.classifier-ns-per-tick")) {
+                "cost.classifier-ns-per-tick", "cost.detector-ns-per-tick")) {
             assertTrue(f.containsKey(key), key + " in:\n" + r.out());
         }
         assertEquals("2", f.get("sorties"));
@@ -177,6 +177,8 @@ class TrainEvaluateCommandTest {
         // a wall-clock figure, different on every run
         a.remove("cost.classifier-ns-per-tick");
         b.remove("cost.classifier-ns-per-tick");
+        a.remove("cost.detector-ns-per-tick");
+        b.remove("cost.detector-ns-per-tick");
         assertEquals(a, b);
     }
 

@@ -1,0 +1,70 @@
+package org.pointcall.models.detect;
+
+import java.util.List;
+
+import org.pointcall.shared.kind.ManoeuvreKind;
+
+/**
+ * The named boundary rules: once the classifier has found a point, these place its begin and end from the physics,
+ * where the smoothed class probability is seconds off. Each is switched off by naming it in
+ * {@link DetectorSettings#disabledRules()}, like a guard rule. See {@link BoundaryRefiner} for how each works.
+ */
+public final class BoundaryRules {
+    /** The begin goes back (or forward) to where the aircraft left its steady entry: the first input's onset. */
+    public static final String BEGIN_DEPARTURE = "begin-departure";
+    /** The end goes to where the aircraft is back in steady level flight after the manoeuvre's core. */
+    public static final String END_RECOVERY = "end-recovery";
+    /** A level acceleration spans the whole stretch of gaining speed, up to the highest speed before it is lost. */
+    public static final String ACCEL_EXTENT = "accel-extent";
+    /** A stabilised point spans the whole hold of its Hp and CAS around the classifier's stretch. */
+    public static final String STABILISED_EXTENT = "stabilised-extent";
+    /** A stall's kind, wings-level or turning, is told by the bank it held on the way to its break. */
+    public static final String STALL_BANK = "stall-bank";
+    /** A level acceleration must gain a good share of its entry speed: the whole point is judged on it. */
+    public static final String ACCEL_GAIN = "accel-gain";
+    /**
+     * A kind enters at a lower smoothed probability when every one of its rules that can judge live has already
+     * passed (a doublet's two reversals, a roll's full turn): the physics vouches for a classifier that is unsure.
+     */
+    public static final String PHYSICS_ENTRY = "physics-entry";
+    /** Long points (level acceleration, phugoid, stabilised) bridge longer gaps of their own kind. */
+    public static final String FRAGMENT_MERGE = "fragment-merge";
+
+    /** Every boundary rule name, in documentation order. */
+    public static final List<String> NAMES = List.of(BEGIN_DEPARTURE, END_RECOVERY, ACCEL_EXTENT, ACCEL_GAIN,
+            FRAGMENT_MERGE, PHYSICS_ENTRY, STABILISED_EXTENT, STALL_BANK);
+
+    private BoundaryRules() {
+    }
+
+    /** Names of the boundary rules that apply to {@code kind}. */
+    public static List<String> namesFor(ManoeuvreKind kind) {
+        switch (kind) {
+            case STALL_LEVEL:
+            case STALL_TURN:
+                // an AoA peak with a fall is common outside stalls: too weak to vouch for an entry
+                return List.of(BEGIN_DEPARTURE, END_RECOVERY, STALL_BANK);
+            case WIND_UP_TURN:
+            case AILERON_ROLL:
+            case SIDESLIP:
+                return List.of(BEGIN_DEPARTURE, END_RECOVERY, PHYSICS_ENTRY);
+            case LOOP:
+                return List.of(BEGIN_DEPARTURE, PHYSICS_ENTRY);
+            case PITCH_DOUBLET:
+                return List.of(PHYSICS_ENTRY);
+            case PHUGOID:
+                return List.of(BEGIN_DEPARTURE, FRAGMENT_MERGE);
+            case LEVEL_ACCEL:
+                return List.of(ACCEL_EXTENT, ACCEL_GAIN, FRAGMENT_MERGE);
+            case STABILISED:
+                return List.of(STABILISED_EXTENT, FRAGMENT_MERGE);
+            default:
+                return List.of();
+        }
+    }
+
+    /** True when {@code name} applies to {@code kind} and is not switched off in {@code settings}. */
+    public static boolean applies(String name, ManoeuvreKind kind, DetectorSettings settings) {
+        return settings.ruleEnabled(name) && namesFor(kind).contains(name);
+    }
+}

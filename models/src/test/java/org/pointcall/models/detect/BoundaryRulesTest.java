@@ -1,0 +1,245 @@
+package org.pointcall.models.detect;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.pointcall.models.detect.PointEvent.Type.DISCARDED;
+import static org.pointcall.models.detect.PointEvent.Type.ENDED;
+import static org.pointcall.models.detect.SyntheticSortie.assertWellFormed;
+
+import java.util.Set;
+import java.util.SplittableRandom;
+
+import org.junit.jupiter.api.Test;
+import org.pointcall.models.detect.SyntheticSortie.Bump;
+import org.pointcall.models.detect.SyntheticSortie.Physics;
+import org.pointcall.models.detect.SyntheticSortie.Probabilities;
+import org.pointcall.shared.error.PointcallException;
+import org.pointcall.shared.kind.ManoeuvreKind;
+
+/**
+ * The boundary rules on hand-built flights at 100 Hz with a classifier that is late, early or unsure: each rule
+ * moves the begin or end to the physical instant the flight was built with, and switched off leaves the classifier's.
+ */
+class BoundaryRulesTest {
+    private static final double KT = 1852.0 / 3600.0;
+
+    private static double s(long ns) {
+        return ns / 1e9;
+    }
+
+    private static SyntheticSortie run(DetectorSettings st, double untilS, Physics physics, Bump... bumps) {
+        SyntheticSortie s = new SyntheticSortie(st).run(untilS, new Probabilities(7L, 0.05, 0.01, bumps), physics)
+                .finish();
+        assertWellFormed(s.events);
+        return s;
+    }
+
+    private static DetectorSettings without(String... rules) {
+        return DetectorSettings.defaults().withDisabledRules(Set.of(rules));
+    }
+
+    /** Level until 10 s, then a pull to 1.3 g for 2 s, a full roll at 150 deg/s from 12 s, wings level from 14.4 s. */
+    private static Physics roll() {
+        SplittableRandom r = new SplittableRandom(3L);
+        return (t, f, s) -> {
+            SyntheticSortie.level(t, f, s);
+            s.set(f, "P", 0.2 * (2 * r.nextDouble() - 1));
+            if (t >= 10 && t < 12) {
+                s.set(f, "Nz", 1.3);
+                s.set(f, "Q", 4.0);
+            } else if (t >= 12 && t < 14.4) {
+                s.set(f, "P", 150.0);
+                s.set(f, "Roll", Math.IEEEremainder(150.0 * (t - 12), 360.0));
+            }
+        };
+    }
+
+    @Test
+    void aLateRollBeginsWhereTheAircraftLeftItsSteadyEntryAndEndsOnceItIsSteadyAgain() {
+        // the classifier rises a little after the roll began (the roll rule sees from its rise on)
+        Bump late = new Bump(ManoeuvreKind.AILERON_ROLL, 12.2, 17, 0.9);
+        SyntheticSortie run = run(DetectorSettings.defaults(), 30, roll(), late);
+        PointEvent kept = run.onlyFinal();
+        assertEquals(ENDED, kept.type(), kept.evidence()::toString);
+        assertEquals(10.0, s(kept.beginNs()), 0.3, kept.evidence()::toString);
+        assertTrue(run.ofType(PointEvent.Type.BEGUN).get(0).hasEvidence("begin at begin-departure"),
+                run.events::toString);
+        // steady from 14.4 s, for the 2 s dwell
+        assertEquals(16.4, s(kept.endNs()), 0.2, kept.evidence()::toString);
+        assertTrue(kept.hasEvidence("end moved to end-recovery"), kept.evidence()::toString);
+
+        PointEvent plain = run(without(BoundaryRules.BEGIN_DEPARTURE, BoundaryRules.END_RECOVERY), 30, roll(), late)
+                .onlyFinal();
+        assertEquals(ENDED, plain.type());
+        assertEquals(12.2, s(plain.beginNs()), 0.2, "the classifier's own begin");
+        assertEquals(17.0, s(plain.endNs()), 0.2, "the classifier's own end");
+    }
+
+    @Test
+    void theLiveBeginIsAlreadyTheDeparture() {
+        SyntheticSortie s = run(DetectorSettings.defaults(), 30, roll(),
+                new Bump(ManoeuvreKind.AILERON_ROLL, 12.2, 17, 0.9));
+        PointEvent begun = s.ofType(PointEvent.Type.BEGUN).get(0);
+        assertEquals(10.0, s(begun.beginNs()), 0.3, begun.evidence()::toString);
+        assertTrue(s(begun.reportedAtNs()) < 14.0, "reported as soon as the classifier entered");
+    }
+
+    /**
+     * A stall in a 30 deg bank: slowing at 1 kt/s from 10 s with AoA rising to its break at 20 s, a nose-down
+     * unload to 22 s, a pull to level flight to 26 s, then steady and wings level.
+     */
+    private static Physics turningStall() {
+        SplittableRandom r = new SplittableRandom(11L);
+        return (t, f, s) -> {
+            SyntheticSortie.level(t, f, s);
+            double bank = t < 20 ? 30.0 : t < 26 ? 30.0 * (26 - t) / 6 : 0.0;
+            s.set(f, "Roll", bank);
+            s.set(f, "Nz", t < 20 ? 1 / Math.cos(Math.toRadians(bank)) : t < 22 ? 0.7 : t < 26 ? 1.5 : 1.0);
+            s.set(f, "KCAS", 150 - Math.max(0, Math.min(t, 20) - 10) + Math.max(0, Math.min(t, 26) - 20) * 1.5);
+            double aoa = t < 10 ? 4 : t < 20 ? 4 + 1.2 * (t - 10) : t < 22 ? 16 - 6 * (t - 20) : 4;
+            s.set(f, "AoA", aoa + 0.2 * (2 * r.nextDouble() - 1));
+            s.set(f, "Q", t >= 20 && t < 22 ? -5.0 : t >= 22 && t < 26 ? 5.0 : 0.0);
+            s.set(f, "Pitch", t >= 20 && t < 26 ? -10.0 : aoa - 1.0);
+        };
+    }
+
+    @Test
+    void aTurningStallLostBeforeItsBreakIsKeptToItsRecoveryAndToldByItsBank() {
+        // the classifier calls it wings-level and loses it a second before the break
+        Bump lost = new Bump(ManoeuvreKind.STALL_LEVEL, 10.5, 19, 0.9);
+        PointEvent kept = run(DetectorSettings.defaults(), 60, turningStall(), lost).onlyFinal();
+        assertEquals(ENDED, kept.type(), kept.evidence()::toString);
+        assertEquals(ManoeuvreKind.STALL_TURN, kept.kind(), kept.evidence()::toString);
+        assertTrue(kept.hasEvidence("passed stall-aoa-peak"), kept.evidence()::toString);
+        assertEquals(10.0, s(kept.beginNs()), 0.5, kept.evidence()::toString);
+        assertEquals(28.0, s(kept.endNs()), 0.3, kept.evidence()::toString);
+        assertEquals(20.0, s(kept.keyInstant("break").orElseThrow()), 0.3);
+
+        PointEvent noRecovery = run(without(BoundaryRules.END_RECOVERY), 60, turningStall(), lost).onlyFinal();
+        assertEquals(DISCARDED, noRecovery.type(), "without it the classifier's stretch has no break");
+        assertTrue(noRecovery.hasEvidence("failed stall-aoa-peak"), noRecovery.evidence()::toString);
+
+        PointEvent noBank = run(without(BoundaryRules.STALL_BANK), 60, turningStall(), lost).onlyFinal();
+        assertEquals(ManoeuvreKind.STALL_LEVEL, noBank.kind(), "the classifier's kind stands");
+    }
+
+    /** Level; from 10 s gaining 1 kt/s up to 70 s, then slowing at 1 kt/s; CAS from {@code fromKt}. */
+    private static Physics accel(double fromKt, double ktPerS) {
+        SplittableRandom r = new SplittableRandom(5L);
+        return (t, f, s) -> {
+            SyntheticSortie.level(t, f, s);
+            double v = fromKt + ktPerS * (Math.max(0, Math.min(t, 70) - 10)) - Math.max(0, t - 70);
+            s.set(f, "KCAS", v + 0.2 * (2 * r.nextDouble() - 1));
+        };
+    }
+
+    @Test
+    void aLevelAccelerationSpansTheWholeGainOfSpeed() {
+        Bump middle = new Bump(ManoeuvreKind.LEVEL_ACCEL, 30, 60, 0.9);
+        PointEvent kept = run(DetectorSettings.defaults(), 120, accel(200, 1.0), middle).onlyFinal();
+        assertEquals(ENDED, kept.type(), kept.evidence()::toString);
+        assertEquals(10.0, s(kept.beginNs()), 1.0, kept.evidence()::toString);
+        assertEquals(70.0, s(kept.endNs()), 1.0, kept.evidence()::toString);
+        assertTrue(kept.hasEvidence("disabled accel-gain") || !kept.hasEvidence("accel-gain"),
+                "accel-gain is off by default: " + kept.evidence());
+
+        PointEvent plain = run(without(BoundaryRules.ACCEL_EXTENT), 120, accel(200, 1.0), middle).onlyFinal();
+        assertEquals(30.0, s(plain.beginNs()), 0.2);
+        assertEquals(60.0, s(plain.endNs()), 0.2);
+    }
+
+    @Test
+    void aLevelAccelerationThatGainsLittleIsDiscarded() {
+        // 200 to 206 kt: 3 %, a transit's drift rather than a sweep of speed
+        Bump bump = new Bump(ManoeuvreKind.LEVEL_ACCEL, 10, 70, 0.9);
+        // off by default (an underpowered airframe's runs gain little too): switched on here
+        PointEvent dropped = run(DetectorSettings.defaults().withDisabledRules(Set.of()), 120, accel(200, 0.1), bump)
+                .onlyFinal();
+        assertEquals(DISCARDED, dropped.type(), dropped.evidence()::toString);
+        assertTrue(dropped.hasEvidence("failed accel-gain"), dropped.evidence()::toString);
+        PointEvent kept = run(DetectorSettings.defaults(), 120, accel(200, 0.1), bump).onlyFinal();
+        assertEquals(ENDED, kept.type(), kept.evidence()::toString);
+        assertTrue(DetectorSettings.defaults().disabledRules().contains(BoundaryRules.ACCEL_GAIN));
+    }
+
+    /** A doublet: Q +8 deg/s from 10 to 11 s, -8 deg/s to 12 s, the response's overshoot +3 deg/s to 13 s. */
+    private static Physics doublet() {
+        return (t, f, s) -> {
+            SyntheticSortie.level(t, f, s);
+            s.set(f, "Q", t >= 10 && t < 11 ? 8.0 : t >= 11 && t < 12 ? -8.0 : t >= 12 && t < 13 ? 3.0 : 0.0);
+        };
+    }
+
+    @Test
+    void anUnsureClassifierIsEnoughForADoubletWhoseReversalsAreSeen() {
+        Bump unsure = new Bump(ManoeuvreKind.PITCH_DOUBLET, 10, 16, 0.45);
+        SyntheticSortie s = run(DetectorSettings.defaults(), 30, doublet(), unsure);
+        PointEvent kept = s.onlyFinal();
+        assertEquals(ENDED, kept.type(), kept.evidence()::toString);
+        assertTrue(s.ofType(PointEvent.Type.BEGUN).get(0).hasEvidence("entered: smoothed p(pitch-doublet) above 0.25"),
+                s.events::toString);
+        assertTrue(run(without(BoundaryRules.PHYSICS_ENTRY), 30, doublet(), unsure).events.isEmpty(),
+                "below p_on and without the rule: nothing");
+        // without the reversals the lower entry is not earned
+        assertTrue(run(DetectorSettings.defaults(), 30, (t, f, x) -> SyntheticSortie.level(t, f, x), unsure)
+                .events.isEmpty());
+    }
+
+    @Test
+    void anExtentRuleDoesNotMakeAShortFragmentLongEnough() {
+        // the classifier sees 10 s of a 60 s gain: spread over the gain it would last 60 s, but 10 s is below the
+        // 15 s minimum of a level acceleration
+        Bump fragment = new Bump(ManoeuvreKind.LEVEL_ACCEL, 50, 60, 0.9);
+        PointEvent d = run(DetectorSettings.defaults(), 120, accel(200, 1.0), fragment).onlyFinal();
+        assertEquals(DISCARDED, d.type(), d.evidence()::toString);
+        assertTrue(d.hasEvidence("failed min-duration: 10.00 s (needs 15.00 s) as the classifier saw it"),
+                d.evidence()::toString);
+    }
+
+    @Test
+    void aLongPointBridgesALongerGapOfItsOwnKind() {
+        Bump a = new Bump(ManoeuvreKind.PHUGOID, 10, 50, 0.9);
+        Bump b = new Bump(ManoeuvreKind.PHUGOID, 55, 100, 0.9);
+        SyntheticSortie merged = run(DetectorSettings.defaults(), 130, null, a, b);
+        PointEvent one = merged.onlyFinal();
+        assertEquals(10.0, s(one.beginNs()), 0.2);
+        assertEquals(100.0, s(one.endNs()), 0.2);
+        SyntheticSortie split = run(without(BoundaryRules.FRAGMENT_MERGE), 130, null, a, b);
+        assertEquals(2, split.ofType(ENDED).size(), split.events::toString);
+    }
+
+    @Test
+    void aStabilisedPointLastsAsLongAsItsHold() {
+        SplittableRandom r = new SplittableRandom(9L);
+        Physics holdThenClimb = (t, f, s) -> {
+            SyntheticSortie.level(t, f, s);
+            s.set(f, "Hp", 10000 + 10 * (2 * r.nextDouble() - 1) + (t >= 40 ? 50 * (t - 40) : 0));
+            s.set(f, "KCAS", 250 + 0.5 * (2 * r.nextDouble() - 1));
+            if (t >= 40) {
+                s.set(f, "Pitch", 8.0);
+                s.set(f, "Nz", t < 41 ? 1.2 : 1.0);
+            }
+        };
+        Bump cut = new Bump(ManoeuvreKind.STABILISED, 10, 28, 0.9);
+        PointEvent kept = run(DetectorSettings.defaults(), 70, holdThenClimb, cut).onlyFinal();
+        assertEquals(ENDED, kept.type(), kept.evidence()::toString);
+        assertEquals(10.0, s(kept.beginNs()), 0.2, "the begin stays the classifier's");
+        assertEquals(40.0, s(kept.endNs()), 0.5, kept.evidence()::toString);
+        assertTrue(kept.hasEvidence("passed stabilised-steady"), kept.evidence()::toString);
+        PointEvent plain = run(without(BoundaryRules.STABILISED_EXTENT), 70, holdThenClimb, cut).onlyFinal();
+        assertEquals(28.0, s(plain.endNs()), 0.2);
+    }
+
+    @Test
+    void boundaryRulesAreNamedLikeGuardRulesAndUnknownNamesAreRefused() {
+        for (String name : BoundaryRules.NAMES) {
+            DetectorSettings.defaults().withDisabledRules(Set.of(name));
+        }
+        PointcallException e = org.junit.jupiter.api.Assertions.assertThrows(PointcallException.class,
+                () -> DetectorSettings.defaults().withDisabledRules(Set.of("begin-departures")));
+        assertTrue(e.getMessage().contains("begin-departure"), e.getMessage());
+        PointcallException b = org.junit.jupiter.api.Assertions.assertThrows(PointcallException.class,
+                () -> BoundarySettings.defaults().withSteadyDwellS(0));
+        assertTrue(b.getMessage().contains("steadyDwellS must be a finite number above 0"), b.getMessage());
+    }
+}
