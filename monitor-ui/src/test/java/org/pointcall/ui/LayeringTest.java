@@ -73,4 +73,11 @@ class LayeringTest {
     void noUtilGrabBagPackages() {
         check(noClasses().should().resideInAPackage("org.pointcall..util.."));
     }
+
+    /** The console's packages (console, desk, demo, share, trace, settings, cli) depend on each other one way. */
+    @Test
+    void consolePackagesHaveNoCycles() {
+        check(com.tngtech.archunit.library.dependencies.SlicesRuleDefinition.slices()
+                .matching("org.pointcall.ui.(*)..").should().beFreeOfCycles());
+    }
 }

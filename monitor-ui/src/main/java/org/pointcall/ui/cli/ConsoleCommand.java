@@ -202,7 +202,7 @@ public final class ConsoleCommand implements Callable<Integer> {
             say.accept("watching sortie " + s.sortie() + " (" + s.source() + "), read-only");
             ConsoleSetup setup = new ConsoleSetup("pointcall console \u2014 " + s.sortie() + " (watching " + where
                     + ", read-only)", watching.link(), watching.traces(), settings,
-                    settingsPath, false, ConsoleSetup.DEFAULT_REDRAW_HZ, TraceDrawing.ENVELOPE);
+                    settingsPath, false, ConsoleSetup.DEFAULT_REDRAW_HZ, TraceDrawing.ENVELOPE, true);
             ConsoleApp.run(setup, screenshot == null ? null : new ConsoleApp.Screenshot(screenshot, afterS));
             if (screenshot != null) {
                 spec.commandLine().getOut().println("wrote: " + screenshot);

@@ -18,9 +18,10 @@ import org.pointcall.ui.trace.TraceFeed;
  * @param replay       show the replay transport
  * @param maxRedrawHz  charts are redrawn at most this often (never more than once a pulse)
  * @param drawing      how charts are fed
+ * @param watching     a watching console (read-only): arming and the engineer's calls are made at the first one
  */
 public record ConsoleSetup(String title, DeskLink link, TraceFeed traces, ConsoleSettings settings, Path settingsFile,
-                           boolean replay, double maxRedrawHz, TraceDrawing drawing) {
+                           boolean replay, double maxRedrawHz, TraceDrawing drawing, boolean watching) {
     public static final double DEFAULT_REDRAW_HZ = 25;
 
     public ConsoleSetup {
@@ -33,7 +34,13 @@ public record ConsoleSetup(String title, DeskLink link, TraceFeed traces, Consol
         }
     }
 
+    /** A console that makes calls (not a watching one). */
+    public ConsoleSetup(String title, DeskLink link, TraceFeed traces, ConsoleSettings settings, Path settingsFile,
+                        boolean replay, double maxRedrawHz, TraceDrawing drawing) {
+        this(title, link, traces, settings, settingsFile, replay, maxRedrawHz, drawing, false);
+    }
+
     public ConsoleSetup withSettings(ConsoleSettings s) {
-        return new ConsoleSetup(title, link, traces, s, settingsFile, replay, maxRedrawHz, drawing);
+        return new ConsoleSetup(title, link, traces, s, settingsFile, replay, maxRedrawHz, drawing, watching);
     }
 }

@@ -114,6 +114,10 @@ public final class ConsoleView {
         alarms.ack.setOnAction(e -> acknowledge());
         point.note.setOnAction(e -> finishCall());
         lanes.apply.setOnAction(e -> applyLanes());
+        if (setup.watching()) {
+            point.watching();
+            header.keys.setText("K acknowledge here  \u2191\u2193 select  [ ] span  L chart groups");
+        }
         lanes.cancel.setOnAction(e -> closeLanes());
         point.note.setDisable(true);
 
@@ -237,6 +241,11 @@ public final class ConsoleView {
             return;
         }
         boolean handled = true;
+        if (setup.watching() && (e.getCode() == KeyCode.A || e.getCode() == KeyCode.G || e.getCode() == KeyCode.R)) {
+            point.hint.setText("watching: arming and calls are made at the first console");
+            e.consume();
+            return;
+        }
         switch (e.getCode()) {
             case A -> arm();
             case G -> beginCall(Outcome.GOOD);

@@ -20,7 +20,7 @@ final class HeaderBar {
     private final Label dropped = new Label();
     private final Label latency = new Label();
     private final Label screen = new Label();
-    private final Label keys = new Label("A arm  G good  R repeat  K acknowledge  \u2191\u2193 select  [ ] span  L chart groups");
+    final Label keys = new Label("A arm  G good  R repeat  K acknowledge  \u2191\u2193 select  [ ] span  L chart groups");
 
     HeaderBar() {
         sortie.getStyleClass().add("headline");

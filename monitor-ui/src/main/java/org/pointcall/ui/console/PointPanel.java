@@ -32,6 +32,7 @@ final class PointPanel {
     final Button repeat = new Button("Repeat  [R]");
     final Button ack = new Button("Acknowledge  [K]");
     final TextField note = new TextField();
+    private HBox buttons;
     final Label hint = new Label("");
 
     PointPanel() {
@@ -70,7 +71,7 @@ final class PointPanel {
         hint.setId("call-hint");
         hint.getStyleClass().add("dim");
         hint.setWrapText(true);
-        HBox buttons = new HBox(6, arm, good, repeat);
+        buttons = new HBox(6, arm, good, repeat);
         VBox calls = new VBox(4, buttons, note, hint, ack);
         calls.setStyle("-fx-padding: 6 0 0 0; -fx-border-color: #252d36; -fx-border-width: 1 0 0 0;");
         node = new VBox(4, head, id, title, config, clocks, scroll, calls);
@@ -119,5 +120,17 @@ final class PointPanel {
         hold.setText(p.holdRequiredS() > 0
                 ? String.format(Locale.ROOT, "%4.1f / %.0f s", p.holdS(), p.holdRequiredS())
                 : String.format(Locale.ROOT, "%4.1f s", p.holdS()));
+    }
+
+    /** A watching console: no arming or calls here (they are made at the first console); says so instead. */
+    void watching() {
+        for (Button b : List.of(arm, good, repeat)) {
+            b.setVisible(false);
+        }
+        buttons.setVisible(false);
+        buttons.setManaged(false);
+        note.setVisible(false);
+        note.setManaged(false);
+        hint.setText("watching: arming and calls are made at the first console");
     }
 }

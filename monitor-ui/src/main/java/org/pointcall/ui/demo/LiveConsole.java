@@ -13,7 +13,6 @@ import org.pointcall.shared.dictionary.ParameterDictionary;
 import org.pointcall.ui.desk.DeskLink;
 import org.pointcall.ui.settings.ConsoleSettings;
 import org.pointcall.ui.trace.TraceFeed;
-import org.pointcall.ui.share.SessionShare;
 import org.pointcall.ui.trace.TraceTap;
 
 /**
@@ -38,9 +37,9 @@ public final class LiveConsole implements AutoCloseable {
     private final DeskPublisher publisher;
     private final SessionDesk desk;
     private volatile CardSession session;
-    private volatile SessionShare share;
+    private volatile StreamShare share;
     private volatile String shareSource = "";
-    private SessionShare.SharedStream shared;
+    private StreamShare.Shared shared;
 
     /**
      * @param dictionary the expected stream dictionary (the charted parameters are checked against it)
@@ -74,12 +73,12 @@ public final class LiveConsole implements AutoCloseable {
             if (old != null) {
                 old.finish();
             }
-            SessionShare sh = share;
+            StreamShare sh = share;
             if (shared != null) {
                 shared.end();
                 shared = null;
             }
-            SessionShare.SharedStream ss = sh == null ? null : sh.begin(id, d, shareSource + " stream " + id);
+            StreamShare.Shared ss = sh == null ? null : sh.begin(id, d, shareSource + " stream " + id);
             CardSession s = sessions.create(d, ss == null ? desk : e -> {
                 desk.onEvent(e);
                 ss.onEvent(e);
@@ -116,11 +115,11 @@ public final class LiveConsole implements AutoCloseable {
 
     /**
      * Shares every session of this console on Kafka (its events, card and live view); give the same share's
-     * {@link SessionShare#tee} as the tee so the datagrams go too. Call before {@link #start}.
+     * {@code SessionShare.tee} as the tee so the datagrams go too. Call before {@link #start}.
      *
      * @param source where the telemetry comes from, in words
      */
-    public void share(SessionShare s, String source) {
+    public void share(StreamShare s, String source) {
         this.shareSource = source;
         this.share = s;
     }

@@ -37,7 +37,6 @@ import org.pointcall.ingest.pipeline.PacketQueue;
 import org.pointcall.ingest.udp.DatagramHandler;
 import org.pointcall.ingest.wire.DecoderOptions;
 import org.pointcall.ingest.wire.WireFormat;
-import org.pointcall.models.card.SessionListener;
 import org.pointcall.models.card.SessionSnapshot;
 import org.pointcall.shared.dictionary.DictionaryFiles;
 import org.pointcall.shared.dictionary.ParameterDictionary;
@@ -57,7 +56,7 @@ import org.pointcall.shared.outcome.SessionEvent;
  * the topics that are missing, sends, and samples the sessions' snapshots for the views; it alone may wait on the
  * broker (metadata, a full producer buffer), which only fills the queues. Failed sends are counted by kind.
  */
-public final class SessionShare implements AutoCloseable {
+public final class SessionShare implements AutoCloseable, org.pointcall.ui.demo.StreamShare {
     private static final int PACKET_QUEUE = 8192;
     private static final int MAX_PENDING_RECORDS = 50_000;
     private static final long VIEW_PERIOD_NS = 250_000_000L;
@@ -165,6 +164,7 @@ public final class SessionShare implements AutoCloseable {
      *
      * @param source where the telemetry comes from, in words (for the watcher's header)
      */
+    @Override
     public SharedStream begin(int streamId, ParameterDictionary dictionary, String source) {
         String text = DictionaryFiles.toYaml(dictionary);
         if (dictionariesShared.add(dictionary.hash())) {
@@ -187,7 +187,7 @@ public final class SessionShare implements AutoCloseable {
     }
 
     /** One card session's side of the share: its events, and the session whose active point it shows. */
-    public final class SharedStream implements SessionListener {
+    public final class SharedStream implements org.pointcall.ui.demo.StreamShare.Shared {
         private final int streamId;
         private final String session;
         private volatile Supplier<SessionSnapshot> view;

@@ -309,7 +309,7 @@ class SharedSessionTest {
         ConsoleView[] view = new ConsoleView[1];
         FxToolkit.setupStage(stage -> {
             view[0] = new ConsoleView(new ConsoleSetup("watch", early.link(), early.traces(),
-                    ConsoleSettings.defaults(), null, false, 30, TraceDrawing.ENVELOPE));
+                    ConsoleSettings.defaults(), null, false, 30, TraceDrawing.ENVELOPE, true));
             stage.setScene(new Scene(view[0].root(), 1400, 900));
             stage.show();
             view[0].root().requestFocus();
@@ -324,7 +324,12 @@ class SharedSessionTest {
             assertTrue(((Label) robot.lookup("#card-state-SL-1").query()).getText().startsWith("GOOD"));
             long sent = early.link().sentCount();
             robot.press(KeyCode.A).release(KeyCode.A);
-            WaitForAsyncUtils.waitFor(10, TimeUnit.SECONDS, () -> early.link().sentCount() > sent);
+            WaitForAsyncUtils.waitFor(10, TimeUnit.SECONDS, () -> ((Label) robot.lookup("#call-hint").query())
+                    .getText().startsWith("watching"));
+            assertEquals(sent, early.link().sentCount(), "the watching screen sends no arming");
+            assertFalse(robot.lookup("#arm-button").query().isVisible(), "and shows no arm or call buttons");
+            // a command that reaches the watched desk all the same is refused there, and said so in the log
+            early.link().send(new org.pointcall.ui.desk.DeskCommand.Arm("LP-1"));
             WaitForAsyncUtils.waitFor(10, TimeUnit.SECONDS, () -> ((ListView<?>) robot.lookup("#event-log")
                     .query()).getItems().stream().anyMatch(i -> i.toString().contains(WatchDesk.REFUSED)));
             SessionSnapshot snap = early.desk().mirror().snapshot(0);
