@@ -664,6 +664,9 @@ public final class CardSession {
         }
     }
 
+    /** A live gauge shows a parameter's newest sample up to this old (a parameter sampled at 0.5 Hz or more). */
+    static final long LIVE_HOLD_NS = 2_000_000_000L;
+
     /** One band of the active point, gauged at every decision tick. */
     private final class LiveGauge {
         final TestPoint point;
@@ -695,17 +698,24 @@ public final class CardSession {
                 return;
             }
             String p = band.parameter();
-            Map<String, Long> hints = active.hints;
-            if (band.phase() == BandPhase.THROUGHOUT
-                    && PhaseJudge.throughoutEndNs(point.kind(), hints, Long.MAX_VALUE) < nowNs) {
-                return; // the technique is over (the stall has broken): the band no longer applies
-            }
+            // A throughout band is gauged live to the point's end. Where it stops applying (a stall's break, a
+            // wind-up turn's highest Nz) is only known for sure once the point is analysed, and the verdict
+            // judges it there; the detector's live marks come too early (a stall is confirmed on the first small
+            // AoA peak of its entry), and stopping on them froze the gauges for the rest of the entry.
             if (band.phase() == BandPhase.RATE) {
-                Long at = hints.get(band.instant());
-                long to = at == null ? nowNs : Math.min(at, nowNs);
-                valueSi = PhaseJudge.slope(history, p, to - Math.round(band.overS() * 1e9), to);
+                // live: the rate over the last interval (the same early marks would freeze it); judged at the end
+                // over the interval before the analysed instant
+                valueSi = PhaseJudge.slope(history, p, nowNs - Math.round(band.overS() * 1e9), nowNs);
             } else {
-                double v = history.valueSi(p, history.size() - 1);
+                // the newest sample of the parameter: a slow one (a discrete at 4 Hz) is NaN in most frames, and
+                // the decision ticks may never fall on a frame that carries it
+                double v = Double.NaN;
+                for (int i = history.size() - 1; i >= 0 && history.timeNs(i) >= nowNs - LIVE_HOLD_NS; i--) {
+                    v = history.valueSi(p, i);
+                    if (Double.isFinite(v)) {
+                        break;
+                    }
+                }
                 if (Double.isFinite(v)) {
                     valueSi = v;
                 }

@@ -283,7 +283,10 @@ public final class SessionDesk implements DeskModel, SessionListener {
                 high = 1;
             }
             double target = b != null && b.isTarget() ? b.unit().fromSi(b.targetSi()) : Double.NaN;
-            double margin = Double.isFinite(high - low) ? g.marginFraction() * (high - low) : Double.NaN;
+            // to the nearer edge in the band's unit; a band open on one side has only the one edge
+            double margin = Double.isFinite(high - low) ? g.marginFraction() * (high - low)
+                    : Double.isNaN(g.value()) ? Double.NaN
+                    : Double.isFinite(low) ? g.value() - low : Double.isFinite(high) ? high - g.value() : Double.NaN;
             gauges.add(new BandGauge(g.subject(), g.phase(), g.band(), g.unit(), low, high, target, g.value(),
                     margin, Math.max(0, g.outsideS()), standing(g.status())));
             if (b != null && b.parameter() != null && (b.phase() == BandPhase.ENTRY || b.phase() == BandPhase.THROUGHOUT)) {

@@ -70,6 +70,63 @@ class CardSessionLiveTest {
                 CardAnalysers.standard()), events::add);
     }
 
+    /**
+     * The demo card's first two stalls flown by the simulated pilot: the throughout bands are gauged live through
+     * the entry, not frozen at the first confirmation of the stall (its first small AoA peak, seconds into the
+     * entry): SL-1's Roll band follows the bank and its KCAS rate band the slowing down, and SL-2's Gear band, on a discrete sampled at 4 Hz (NaN in the
+     * other frames of the 64 Hz stream), reads the gear down from its newest sample and is judged clear.
+     */
+    @Test
+    void throughoutBandsOfAStallAreGaugedLiveThroughItsEntry() {
+        TestCard card = DemoFiles.card();
+        CardSession s = new CardSession(SessionSetup.of(DICT, card, model.model(), model.metadata().description(),
+                CardAnalysers.standard()), e -> { });
+        final class Enough extends RuntimeException {
+            private static final long serialVersionUID = 1L;
+        }
+        java.util.Set<Double> rollValues = new java.util.HashSet<>();
+        List<Double> rateValues = new ArrayList<>();
+        int[] gear = new int[2];
+        try {
+            new SortieSimulator(Airframes.load("veskarn-02"), card, DICT, 1, 64, SensorSettings.DEFAULT,
+                    PilotSettings.DEFAULT).run(List.of(f -> {
+                        if (f.timeNs() > 190_000_000_000L) {
+                            throw new Enough();
+                        }
+                        s.onFrame(f);
+                        SessionSnapshot.ActivePoint a = s.snapshot().active();
+                        long in = a == null ? 0 : f.timeNs() - a.beginNs();
+                        if (a == null || in < 5_000_000_000L || in > 30_000_000_000L) {
+                            return;
+                        }
+                        SessionSnapshot.Gauge g = a.gauges().get(1);
+                        if ("SL-1".equals(a.cardId())) {
+                            assertEquals("Roll", g.subject());
+                            rollValues.add(g.value());
+                            SessionSnapshot.Gauge rate = a.gauges().get(2);
+                            assertEquals("KCAS", rate.subject());
+                            rateValues.add(rate.value());
+                        } else if ("SL-2".equals(a.cardId())) {
+                            assertEquals("Gear", g.subject());
+                            gear[0]++;
+                            if (g.status() == BandStatus.CLEAR && g.value() == 1.0) {
+                                gear[1]++;
+                            }
+                        }
+                    }));
+        } catch (Enough expected) {
+            // both entries seen
+        }
+        assertTrue(rollValues.size() > 20, "SL-1's Roll gauge follows the bank: " + rollValues.size() + " values");
+        // the entry rate over the last seconds, live: the card's 1 kt/s entry, flown by the simulated pilot
+        List<Double> sorted = rateValues.stream().sorted().toList();
+        double median = sorted.get(sorted.size() / 2);
+        assertTrue(new java.util.HashSet<>(rateValues).size() > 20 && median < -0.5 && median > -1.5,
+                "SL-1's entry-rate gauge follows the slowing down: median " + median + " kt/s");
+        assertTrue(gear[0] > 500 && gear[1] > 0.9 * gear[0], "SL-2's Gear gauge reads gear down, clear: " + gear[1]
+                + " of " + gear[0] + " frames");
+    }
+
     private static void onOtherThread(Runnable r) throws InterruptedException {
         Thread t = new Thread(r);
         t.start();
