@@ -1,5 +1,6 @@
 package org.pointcall.models.detect;
 
+import org.pointcall.shared.atmosphere.StandardAtmosphere;
 import org.pointcall.shared.kind.ManoeuvreKind;
 
 /**
@@ -42,7 +43,9 @@ final class BoundaryRefiner {
     private final PhysicsHistory h;
     private final BoundarySettings s;
     private final double[] ts = new double[PhysicsHistory.CAPACITY];
-    private final double[] cas = new double[PhysicsHistory.CAPACITY];
+    /** The series being smoothed ({@link #fill}, then {@link #centred}). */
+    private final double[] work = new double[PhysicsHistory.CAPACITY];
+    private final double[] climb = new double[PhysicsHistory.CAPACITY];
     private final double[] casMean = new double[PhysicsHistory.CAPACITY];
     private final double[] casRate = new double[PhysicsHistory.CAPACITY];
     private final double[] gamma = new double[PhysicsHistory.CAPACITY];
@@ -77,101 +80,46 @@ final class BoundaryRefiner {
         long origin = h.timeNs(i0);
         for (int i = i0; i < i1; i++) {
             ts[i] = (h.timeNs(i) - origin) * 1e-9;
-            cas[i] = h.value(i, PhysicalQuantity.CAS);
         }
-        // prefix sums over finite CAS: count, t, t^2, v, t v
-        p1[i0] = p2[i0] = p3[i0] = p4[i0] = p5[i0] = 0;
-        for (int i = i0; i < i1; i++) {
-            double v = cas[i];
-            boolean ok = Double.isFinite(v);
-            p1[i + 1] = p1[i] + (ok ? 1 : 0);
-            p2[i + 1] = p2[i] + (ok ? ts[i] : 0);
-            p3[i + 1] = p3[i] + (ok ? ts[i] * ts[i] : 0);
-            p4[i + 1] = p4[i] + (ok ? v : 0);
-            p5[i + 1] = p5[i] + (ok ? ts[i] * v : 0);
-        }
-        int lo = i0;
-        int hi = i0;
-        for (int i = i0; i < i1; i++) {
-            while (ts[lo] < ts[i] - 1.0) {
-                lo++;
-            }
-            while (hi < i1 && ts[hi] <= ts[i] + 1.0) {
-                hi++;
-            }
-            double n = p1[hi] - p1[lo];
-            double st = p2[hi] - p2[lo];
-            double stt = p3[hi] - p3[lo];
-            double sv = p4[hi] - p4[lo];
-            double stv = p5[hi] - p5[lo];
-            double den = n * stt - st * st;
-            casMean[i] = n > 0 ? sv / n : Double.NaN;
-            casRate[i] = n >= 3 && den > 1e-12 ? (n * stv - st * sv) / den : Double.NaN;
-        }
+        fill(PhysicalQuantity.CAS);
+        centred(1.0, casMean, casRate);
         flightPath();
-        mean(PhysicalQuantity.P, pMean, 0.25);
+        fill(PhysicalQuantity.P);
+        centred(0.25, pMean, null);
         if (!departures) {
             return;
         }
-        mean(PhysicalQuantity.Q, qMean, 0.25);
+        fill(PhysicalQuantity.Q);
+        centred(0.25, qMean, null);
         for (int i = i0; i < i1; i++) {
             dep[i] = departure(i);
         }
     }
 
-    /**
-     * Flight-path angle per sample of the prepared range: the least-squares slope of Hp over 2 s against the true
-     * airspeed, CAS over the square root of the ISA density ratio at that Hp (troposphere; Hp and CAS are what any
-     * air-data system gives, unlike a body AoA: a vane's AoA may be offset from the body's, so pitch minus AoA is
-     * not used).
-     */
-    private void flightPath() {
-        p1[from] = p2[from] = p3[from] = p4[from] = p5[from] = 0;
+    /** Copies {@code q} over the prepared range into the work series. */
+    private void fill(PhysicalQuantity q) {
         for (int i = from; i < to; i++) {
-            double v = h.value(i, PhysicalQuantity.HP);
-            boolean ok = Double.isFinite(v);
-            p1[i + 1] = p1[i] + (ok ? 1 : 0);
-            p2[i + 1] = p2[i] + (ok ? ts[i] : 0);
-            p3[i + 1] = p3[i] + (ok ? ts[i] * ts[i] : 0);
-            p4[i + 1] = p4[i] + (ok ? v : 0);
-            p5[i + 1] = p5[i] + (ok ? ts[i] * v : 0);
-        }
-        int lo = from;
-        int hi = from;
-        for (int i = from; i < to; i++) {
-            while (ts[lo] < ts[i] - 1.0) {
-                lo++;
-            }
-            while (hi < to && ts[hi] <= ts[i] + 1.0) {
-                hi++;
-            }
-            double n = p1[hi] - p1[lo];
-            double st = p2[hi] - p2[lo];
-            double stt = p3[hi] - p3[lo];
-            double sv = p4[hi] - p4[lo];
-            double stv = p5[hi] - p5[lo];
-            double den = n * stt - st * st;
-            double climb = n >= 3 && den > 1e-12 ? (n * stv - st * sv) / den : Double.NaN;
-            double hp = h.value(i, PhysicalQuantity.HP);
-            double cas = casMean[i];
-            if (Double.isFinite(climb) && Double.isFinite(cas) && cas > 1.0) {
-                // ISA troposphere density ratio, 1 - 2.25577e-5 h (m) to the power 4.2559 (ICAO Doc 7488)
-                double sigma = Math.pow(Math.max(0.05, 1 - 2.25577e-5 * Math.min(Math.max(hp, 0), 11000)), 4.2559);
-                gamma[i] = Math.atan2(climb, cas / Math.sqrt(sigma));
-            } else {
-                gamma[i] = Double.NaN;
-            }
+            work[i] = h.value(i, q);
         }
     }
 
-    /** Mean of {@code q} over +-{@code halfS} around each sample of the prepared range. */
-    private void mean(PhysicalQuantity q, double[] out, double halfS) {
-        p1[from] = p2[from] = 0;
+    /**
+     * Over the prepared range, for each sample the mean and (when {@code slope} is not null) the least-squares
+     * slope per second of the work series' finite values within +-{@code halfS}, by prefix sums of count, t, t^2,
+     * v and t v: one pass whatever the window.
+     */
+    private void centred(double halfS, double[] mean, double[] slope) {
+        p1[from] = p2[from] = p3[from] = p4[from] = p5[from] = 0;
         for (int i = from; i < to; i++) {
-            double v = h.value(i, q);
+            double v = work[i];
             boolean ok = Double.isFinite(v);
             p1[i + 1] = p1[i] + (ok ? 1 : 0);
-            p2[i + 1] = p2[i] + (ok ? v : 0);
+            p4[i + 1] = p4[i] + (ok ? v : 0);
+            if (slope != null) {
+                p2[i + 1] = p2[i] + (ok ? ts[i] : 0);
+                p3[i + 1] = p3[i] + (ok ? ts[i] * ts[i] : 0);
+                p5[i + 1] = p5[i] + (ok ? ts[i] * v : 0);
+            }
         }
         int lo = from;
         int hi = from;
@@ -183,7 +131,39 @@ final class BoundaryRefiner {
                 hi++;
             }
             double n = p1[hi] - p1[lo];
-            out[i] = n > 0 ? (p2[hi] - p2[lo]) / n : Double.NaN;
+            double sv = p4[hi] - p4[lo];
+            if (mean != null) {
+                mean[i] = n > 0 ? sv / n : Double.NaN;
+            }
+            if (slope != null) {
+                double st = p2[hi] - p2[lo];
+                double den = n * (p3[hi] - p3[lo]) - st * st;
+                slope[i] = n >= 3 && den > 1e-12 ? (n * (p5[hi] - p5[lo]) - st * sv) / den : Double.NaN;
+            }
+        }
+    }
+
+    /**
+     * Flight-path angle per sample of the prepared range: the least-squares slope of Hp over 2 s against the true
+     * airspeed, CAS over the square root of the standard atmosphere's density ratio at that Hp (Hp and CAS are what
+     * any air-data system gives, unlike a body AoA: a vane's AoA may be offset from the body's, so pitch minus AoA
+     * is not used).
+     */
+    private void flightPath() {
+        fill(PhysicalQuantity.HP);
+        centred(1.0, null, climb);
+        for (int i = from; i < to; i++) {
+            double hp = work[i];
+            double cas = casMean[i];
+            if (Double.isFinite(climb[i]) && Double.isFinite(hp) && Double.isFinite(cas) && cas > 1.0) {
+                // pressure altitude is the standard atmosphere's geopotential altitude (1976 U.S. Standard Atmosphere)
+                double h = Math.min(Math.max(hp, StandardAtmosphere.MIN_GEOPOTENTIAL_M),
+                        StandardAtmosphere.MAX_GEOPOTENTIAL_M);
+                double sigma = StandardAtmosphere.densityKgM3(h) / StandardAtmosphere.SEA_LEVEL_DENSITY_KG_M3;
+                gamma[i] = Math.atan2(climb[i], cas / Math.sqrt(sigma));
+            } else {
+                gamma[i] = Double.NaN;
+            }
         }
     }
 
