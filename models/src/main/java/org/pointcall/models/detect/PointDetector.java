@@ -575,15 +575,7 @@ public final class PointDetector implements Detector {
         if (settings.allowsSwitch(from, to)) {
             String note = "switched from " + from.key() + " to " + to.key() + " at " + seconds(now) + " s";
             switchNote = switchNote == null ? note : switchNote + "; " + note;
-            pointClass = j;
-            confirmed = false;
-            if (candidateNs[j] == NONE) {
-                restart(j, now);
-            }
-            List<String> ev = new ArrayList<>();
-            addFeatures(ev);
-            ev.add(switchNote);
-            emit(PointEvent.Type.REFINED, now, NONE, List.of(), ev, liveConfidence(j));
+            continueAs(j, now);
             return;
         }
         long jBegin = riseEstimate(j);
@@ -606,8 +598,13 @@ public final class PointDetector implements Detector {
         waiting = false;
         physicalEndNs = NONE;
         merges++;
-        pointClass = j;
         pointAssisted = !channel[j].isOn();
+        continueAs(j, now);
+    }
+
+    /** The open point goes on as class {@code j}, to be confirmed again, and says so with the switch note. */
+    private void continueAs(int j, long now) {
+        pointClass = j;
         confirmed = false;
         if (candidateNs[j] == NONE) {
             restart(j, now);

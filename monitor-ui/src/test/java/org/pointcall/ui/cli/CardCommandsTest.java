@@ -34,7 +34,8 @@ import org.pointcall.shared.outcome.Verdict;
  * KCAS and whose Nz limit is 3.5 g, so the loop must come out REPEAT for both reasons and the stall GOOD.
  */
 class CardCommandsTest {
-    private static final String POINTS = String.join("\n",
+    /** A stall and a loop whose entry KCAS band is filled in ({@code %s} target, {@code %s} tolerance). */
+    static final String POINTS = String.join("\n",
             "points:",
             "  - id: SL-1",
             "    kind: stall-level",

@@ -70,30 +70,12 @@ import org.testfx.util.WaitForAsyncUtils;
 @ExtendWith(LocalKafkaBroker.Shared.class)
 class SharedSessionTest {
     private static final String PREFIX = "share-test";
-    private static final String POINTS = String.join("\n",
-            "points:",
-            "  - id: SL-1",
-            "    kind: stall-level",
-            "    title: Wings-level stall, clean, idle, 1 kt/s entry",
-            "    bands:",
-            "      - {parameter: Hp, phase: entry, target: 10000, tol: 500, unit: ft}",
-            "      - {parameter: Roll, phase: throughout, target: 0, tol: 5, unit: deg}",
-            "      - {parameter: KCAS, phase: rate, before: break, over: 10, target: -1.0, tol: 0.25, unit: kt/s}",
-            "      - {metric: stall-kcas, phase: result, min: 106, max: 120, unit: kt}",
-            "      - {metric: altitude-loss, phase: result, max: 800, unit: ft}",
-            "  - id: LP-1",
-            "    kind: loop",
-            "    title: Loop, 4 g pull",
-            "    bands:",
-            "      - {parameter: KCAS, phase: entry, target: %s, tol: %s, unit: kt}",
-            "      - {parameter: Hp, phase: entry, target: 8000, tol: 300, unit: ft}",
-            "");
     private static final String CARD_A = card("6.0", "320", "10");
     private static final String CARD_B = card("3.5", "300", "5");
 
     private static String card(String limit, String kcas, String tol) {
         return "sortie: T-7\nairframe: veskarn-02\nlimits:\n  - {parameter: Nz, max: " + limit + ", unit: g}\n"
-                + String.format(POINTS, kcas, tol);
+                + String.format(CardCommandsTest.POINTS, kcas, tol);
     }
 
     @TempDir
