@@ -426,29 +426,20 @@ final class BoundaryRefiner {
      * when the aircraft is not slowing there. A slow stall entry is long, and the classifier may rise late in it.
      */
     long decelBegin(long beginNs, long floorNs) {
-        long a = beginNs - Math.round(s.accelLookBackS() * 1e9);
-        if (floorNs != NONE) {
-            a = Math.max(a, floorNs);
-        }
-        int i0 = h.indexAtOrAfter(a);
-        int ib = h.indexAtOrAfter(beginNs);
-        int i1 = Math.min(h.size(), ib + 40);
-        if (ib >= h.size() || ib - i0 < 2) {
-            return NONE;
-        }
-        prepare(i0, i1, false);
-        int i = ib;
-        if (!(casRate[i] < -s.accelRateMps2())) {
-            return NONE;
-        }
-        while (i - 1 >= i0 && casRate[i - 1] < -s.accelRateMps2()) {
-            i--;
-        }
-        return h.timeNs(i);
+        return speedRunBegin(beginNs, floorNs, -1);
     }
 
     /** {@code accel-extent}: the first sample of the run of speed gain that holds {@code beginNs}; NONE if none. */
     long accelBegin(long beginNs, long floorNs) {
+        return speedRunBegin(beginNs, floorNs, 1);
+    }
+
+    /**
+     * The first sample of the run, holding {@code beginNs}, in which dCAS/dt times {@code sign} stays above the
+     * settings' acceleration rate, looked for back to the level acceleration's look-back and not before
+     * {@code floorNs}; NONE when the speed is not changing that way at {@code beginNs}.
+     */
+    private long speedRunBegin(long beginNs, long floorNs, int sign) {
         long a = beginNs - Math.round(s.accelLookBackS() * 1e9);
         if (floorNs != NONE) {
             a = Math.max(a, floorNs);
@@ -461,10 +452,10 @@ final class BoundaryRefiner {
         }
         prepare(i0, i1, false);
         int i = ib;
-        if (!(casRate[i] > s.accelRateMps2())) {
+        if (!(sign * casRate[i] > s.accelRateMps2())) {
             return NONE;
         }
-        while (i - 1 >= i0 && casRate[i - 1] > s.accelRateMps2()) {
+        while (i - 1 >= i0 && sign * casRate[i - 1] > s.accelRateMps2()) {
             i--;
         }
         return h.timeNs(i);
