@@ -592,6 +592,39 @@ final class BoundaryRefiner {
         return n % 2 == 1 ? dep[n / 2] : 0.5 * (dep[n / 2 - 1] + dep[n / 2]);
     }
 
+    /** {@code accel-settled-entry}: settled flight has |bank| below this... */
+    static final double SETTLED_BANK_RAD = Math.toRadians(10);
+    /** ...|AoS| below this... */
+    static final double SETTLED_BETA_RAD = Math.toRadians(3);
+    /** ...and |P| below this. */
+    static final double SETTLED_ROLL_RATE_RAD_S = Math.toRadians(5);
+
+    /**
+     * {@code accel-settled-entry}: the share of the states from {@code fromNs} to {@code toNs} in settled,
+     * wings-level flight without sideslip (each bound quantity within its limit above); NaN when none of bank, AoS
+     * and P was sampled there. A share, not every sample, so one wild point does not decide.
+     */
+    double settledShare(long fromNs, long toNs) {
+        int i0 = h.indexAtOrAfter(fromNs);
+        int i1 = h.indexAtOrAfter(toNs + 1);
+        int seen = 0;
+        int settled = 0;
+        for (int i = i0; i < i1; i++) {
+            double bank = h.value(i, PhysicalQuantity.ROLL);
+            double beta = h.value(i, PhysicalQuantity.AOS);
+            double p = h.value(i, PhysicalQuantity.P);
+            if (!Double.isFinite(bank) && !Double.isFinite(beta) && !Double.isFinite(p)) {
+                continue;
+            }
+            seen++;
+            if (!(Math.abs(bank) >= SETTLED_BANK_RAD) && !(Math.abs(beta) >= SETTLED_BETA_RAD)
+                    && !(Math.abs(p) >= SETTLED_ROLL_RATE_RAD_S)) {
+                settled++;
+            }
+        }
+        return seen == 0 ? Double.NaN : settled / (double) seen;
+    }
+
     /** Relative CAS gain from {@code beginNs} to {@code endNs} (means over 2 s); NaN without CAS. */
     double speedGain(long beginNs, long endNs) {
         int i0 = h.indexAtOrAfter(beginNs);

@@ -20,6 +20,11 @@ public final class BoundaryRules {
     public static final String STABILISED_EXTENT = "stabilised-extent";
     /** A stall's kind, wings-level or turning, is told by the bank it held on the way to its break. */
     public static final String STALL_BANK = "stall-bank";
+    /**
+     * A level acceleration starts from settled, wings-level flight without sideslip (common practice: stabilise at
+     * the start speed, then full power), not out of another manoeuvre's recovery with the power already up.
+     */
+    public static final String ACCEL_SETTLED_ENTRY = "accel-settled-entry";
     /** A level acceleration must gain a good share of its entry speed: the whole point is judged on it. */
     public static final String ACCEL_GAIN = "accel-gain";
     /**
@@ -27,12 +32,17 @@ public final class BoundaryRules {
      * passed (a doublet's two reversals, a roll's full turn): the physics vouches for a classifier that is unsure.
      */
     public static final String PHYSICS_ENTRY = "physics-entry";
+    /**
+     * A pitch doublet is found in the pitch rate alone, without the classifier: quiet, an input of two opposite
+     * lobes whose areas nearly cancel, a settling free response with the speed held ({@link DoubletWatch}).
+     */
+    public static final String DOUBLET_SIGNATURE = "doublet-signature";
     /** Long points (level acceleration, phugoid, stabilised) bridge longer gaps of their own kind. */
     public static final String FRAGMENT_MERGE = "fragment-merge";
 
     /** Every boundary rule name, in documentation order. */
     public static final List<String> NAMES = List.of(BEGIN_DEPARTURE, END_RECOVERY, ACCEL_EXTENT, ACCEL_GAIN,
-            FRAGMENT_MERGE, PHYSICS_ENTRY, STABILISED_EXTENT, STALL_BANK);
+            ACCEL_SETTLED_ENTRY, DOUBLET_SIGNATURE, FRAGMENT_MERGE, PHYSICS_ENTRY, STABILISED_EXTENT, STALL_BANK);
 
     private BoundaryRules() {
     }
@@ -51,11 +61,11 @@ public final class BoundaryRules {
             case LOOP:
                 return List.of(BEGIN_DEPARTURE, PHYSICS_ENTRY);
             case PITCH_DOUBLET:
-                return List.of(PHYSICS_ENTRY);
+                return List.of(DOUBLET_SIGNATURE, PHYSICS_ENTRY);
             case PHUGOID:
                 return List.of(BEGIN_DEPARTURE, FRAGMENT_MERGE);
             case LEVEL_ACCEL:
-                return List.of(ACCEL_EXTENT, ACCEL_GAIN, FRAGMENT_MERGE);
+                return List.of(ACCEL_EXTENT, ACCEL_GAIN, ACCEL_SETTLED_ENTRY, FRAGMENT_MERGE);
             case STABILISED:
                 return List.of(STABILISED_EXTENT, FRAGMENT_MERGE);
             default:

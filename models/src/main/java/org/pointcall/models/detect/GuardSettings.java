@@ -79,12 +79,12 @@ public record GuardSettings(double loopPitchRad, double loopInvertedRollRad, dou
 
     /**
      * Loop 80 deg or inverted past 135 deg of bank; stall rise 2 deg, fall 20 % or Nz drop 0.1 g; roll 315 deg;
-     * wind-up 2 g; doublet floor 1 deg/s, lobes of 25 % of the largest, 2 reversals; stabilised Hp standard deviation
+     * wind-up 2 g; doublet floor 1 deg/s, lobes of 25 % of the largest, 1 reversal (the input's own: a short period damped beyond about 0.7 shows no overshoot past it); stabilised Hp standard deviation
      * 50 ft and CAS 1 %; sideslip 3 deg.
      */
     public static GuardSettings defaults() {
         return new GuardSettings(Math.toRadians(80), Math.toRadians(135), Math.toRadians(2), 0.2, 0.1,
-                Math.toRadians(315), 2.0, Math.toRadians(1), 0.25, 2,
+                Math.toRadians(315), 2.0, Math.toRadians(1), 0.25, 1,
                 // 50 ft: half of the 100 ft altitude band usual for stabilised points (flight-test practice notes,
                 // [memory]); 1 % of CAS is about the 1 to 2 kt usual there, at trainer speeds
                 50 * Units.M_PER_FT, 0.01, Math.toRadians(3));

@@ -63,6 +63,12 @@ public final class PointDetector implements Detector {
     private final boolean[] recovers;
     private final boolean[] accelerates;
     private final boolean[] gains;
+    /** {@code accel-settled-entry} applies to the class. */
+    private final boolean[] settlesFirst;
+    /** {@code accel-settled-entry}: the stretch before the begin that must be settled, ns... */
+    static final long SETTLED_ENTRY_NS = 5_000_000_000L;
+    /** ...for at least this share of its states. */
+    static final double SETTLED_SHARE = 0.9;
     private final boolean[] holds;
     private final long[] gapNs;
     private final long recoveryWaitNs;
@@ -71,6 +77,24 @@ public final class PointDetector implements Detector {
     private static final long END_CHECK_NS = 250_000_000L;
     /** A manoeuvre's core (a stall's break) is looked for up to this long after the classifier's end, ns. */
     private static final long CORE_AFTER_END_NS = 10_000_000_000L;
+
+    /** {@code doublet-signature}: doublets found in the pitch rate alone; -1 when off or not a class. */
+    private final DoubletWatch doublets = new DoubletWatch();
+    private final int doubletClass;
+    /** The open point was opened by the doublet watch, not the classifier. */
+    private boolean physicsPoint;
+    /** Why the watch gave up on the open physics point; it is then discarded. */
+    private String physicsFailure;
+    /** Per class, entry refused until its smoothed probability has fallen below p_off (a point the physics took). */
+    private final boolean[] muted;
+    /** The muted class waits at least until then: its windows still hold the input the physics found. */
+    private long muteUntilNs = NONE;
+    /** How long after a physics doublet's release the classifier's windows may still see its input (12 s). */
+    static final long MUTE_AFTER_RELEASE_NS = 12_000_000_000L;
+    /** Before the input a doublet point holds this much trimmed flight: the analysis takes its trim from it, ns. */
+    static final long DOUBLET_LEAD_NS = 2_000_000_000L;
+    /** A point found by the physics alone has no probability behind it: its confidence. */
+    static final double PHYSICS_CONFIDENCE = 0.75;
 
     private final long maxRefineNs;
     private final long mergeGapNs;
@@ -167,6 +191,7 @@ public final class PointDetector implements Detector {
         this.recovers = new boolean[n];
         this.accelerates = new boolean[n];
         this.gains = new boolean[n];
+        this.settlesFirst = new boolean[n];
         this.holds = new boolean[n];
         this.gapNs = new long[n];
         long fragmentNs = Math.round(settings.boundaries().fragmentGapS() * 1e9);
@@ -180,11 +205,16 @@ public final class PointDetector implements Detector {
             recovers[c] = BoundaryRules.applies(BoundaryRules.END_RECOVERY, k, settings);
             accelerates[c] = BoundaryRules.applies(BoundaryRules.ACCEL_EXTENT, k, settings);
             gains[c] = BoundaryRules.applies(BoundaryRules.ACCEL_GAIN, k, settings);
+            settlesFirst[c] = BoundaryRules.applies(BoundaryRules.ACCEL_SETTLED_ENTRY, k, settings);
             holds[c] = BoundaryRules.applies(BoundaryRules.STABILISED_EXTENT, k, settings);
             if (BoundaryRules.applies(BoundaryRules.FRAGMENT_MERGE, k, settings)) {
                 gapNs[c] = Math.max(mergeGapNs, fragmentNs);
             }
         }
+        int d = classes.indexOf(ManoeuvreKind.PITCH_DOUBLET);
+        this.doubletClass = d >= 0 && BoundaryRules.applies(BoundaryRules.DOUBLET_SIGNATURE, ManoeuvreKind.PITCH_DOUBLET,
+                settings) ? d : -1;
+        this.muted = new boolean[n];
         this.recoveryWaitNs = Math.round(settings.boundaries().recoveryWaitS() * 1e9);
         this.accelWaitNs = Math.round(settings.boundaries().accelWaitS() * 1e9);
         resetRun(NONE);
@@ -211,6 +241,10 @@ public final class PointDetector implements Detector {
         pointClass = -1;
         pointId = 0;
         physics.clear();
+        doublets.clear();
+        physicsPoint = false;
+        physicsFailure = null;
+        java.util.Arrays.fill(muted, false);
         featureCount = 0;
         switchNote = null;
         smoother.reset();
@@ -236,6 +270,9 @@ public final class PointDetector implements Detector {
         lastFrameNs = t;
         binder.fill(frame, state);
         physics.add(state);
+        if (doubletClass >= 0) {
+            doublets.onState(state);
+        }
         historyNs[historyNext] = t;
         state.copyTo(historyValues, historySampledNs, historyNext * PhysicalQuantity.COUNT);
         historyNext = (historyNext + 1) % HISTORY_FRAMES;
@@ -280,6 +317,9 @@ public final class PointDetector implements Detector {
         ticksAccepted++;
         smoother.smooth(timeNs, p, smoothed);
         for (int c : kindClasses) {
+            if (muted[c] && timeNs >= muteUntilNs && smoothed[c] < settings.leaveProbability()) {
+                muted[c] = false;
+            }
             channel[c].update(timeNs, smoothed[c]);
             assist[c].update(timeNs, smoothed[c]);
             edge[c].update(timeNs, p[c]);
@@ -352,6 +392,27 @@ public final class PointDetector implements Detector {
     }
 
     private void decide(long now, String[] top) {
+        if (physicsPoint) {
+            followPhysicsPoint(now);
+            return;
+        }
+        if (doubletClass >= 0 && doublets.status() != DoubletWatch.SEARCHING) {
+            boolean fresh = doublets.status() != DoubletWatch.FAILED
+                    && (lastEndNs == NONE || doublets.inputNs() > lastEndNs);
+            if (phase == IDLE && fresh) {
+                beginPhysicsDoublet(now);
+                followPhysicsPoint(now);
+                return;
+            }
+            if (phase != IDLE && pointClass == doubletClass && fresh
+                    && doublets.inputNs() >= beginNs - DOUBLET_LEAD_NS - maxRefineNs) {
+                adoptPhysicsDoublet(now);
+                followPhysicsPoint(now);
+                return;
+            }
+            // found while another point was open, or given up: not a point of its own
+            doublets.reset();
+        }
         if (phase == IDLE) {
             int c = strongestOn(-1);
             if (c >= 0) {
@@ -467,6 +528,9 @@ public final class PointDetector implements Detector {
 
     /** Kind {@code c} has entered: its channel is on, or its lower one with every live rule of it passed. */
     private boolean entered(int c) {
+        if (muted[c]) {
+            return false;
+        }
         if (channel[c].isOn()) {
             return true;
         }
@@ -564,6 +628,100 @@ public final class PointDetector implements Detector {
             ev.add(moved);
         }
         emit(PointEvent.Type.BEGUN, now, NONE, List.of(), ev, liveConfidence(c));
+    }
+
+    /**
+     * {@code doublet-signature}: opens a doublet point found in the pitch rate ({@link DoubletWatch}), from its
+     * trimmed lead before the input; the classifier waits until it is over.
+     */
+    private void beginPhysicsDoublet(long now) {
+        int c = doubletClass;
+        long b = doublets.inputNs() - DOUBLET_LEAD_NS;
+        if (lastEndNs != NONE) {
+            b = Math.max(b, lastEndNs);
+        }
+        classifierBeginNs = b;
+        pointAssisted = false;
+        restart(c, b);
+        pointId++;
+        phase = ACTIVE;
+        physicsPoint = true;
+        physicsFailure = null;
+        waiting = false;
+        physicalEndNs = NONE;
+        pointClass = c;
+        beginNs = b;
+        begunAtNs = now;
+        confirmed = false;
+        merges = 0;
+        switchNote = null;
+        featureCount = 0;
+        List<String> ev = new ArrayList<>();
+        ev.add("entered: " + BoundaryRules.DOUBLET_SIGNATURE + ": " + doublets.describe() + "; begin "
+                + seconds(DOUBLET_LEAD_NS) + " s before the input");
+        emit(PointEvent.Type.BEGUN, now, NONE, List.of(), ev, PHYSICS_CONFIDENCE);
+    }
+
+    /**
+     * The classifier's open doublet is the one the watch found: from now on the watch places its begin (the trimmed
+     * lead before the input) and its end (the pilot's next input, or the end of the free response).
+     */
+    private void adoptPhysicsDoublet(long now) {
+        physicsPoint = true;
+        physicsFailure = null;
+        long b = doublets.inputNs() - DOUBLET_LEAD_NS;
+        if (lastEndNs != NONE) {
+            b = Math.max(b, lastEndNs);
+        }
+        String moved = "";
+        if (b < beginNs) {
+            moved = "; begin moved to " + seconds(b) + " s from " + seconds(beginNs) + " s";
+            beginNs = b;
+        }
+        emit(PointEvent.Type.REFINED, now, NONE, List.of(), List.of(BoundaryRules.DOUBLET_SIGNATURE + ": "
+                + doublets.describe() + moved), liveConfidence(pointClass));
+    }
+
+    /** The open physics point: confirmed, ended or given up as the watch says. */
+    private void followPhysicsPoint(long now) {
+        int s = doublets.status();
+        if (s == DoubletWatch.BEGUN && !confirmed) {
+            int j = strongestOn(pointClass);
+            if (j >= 0) {
+                // the classifier sees another kind in what the watch has not yet confirmed: that kind has it
+                physicsFailure = classes.name(j) + " entered before the response settled";
+                closePhysicsPoint(now, now, null);
+                begin(j, now, null);
+                return;
+            }
+        }
+        if (s == DoubletWatch.CONFIRMED && !confirmed) {
+            confirmed = true;
+            emit(PointEvent.Type.REFINED, now, NONE, List.of(new KeyInstant("input", doublets.inputNs())),
+                    List.of("confirmed by " + BoundaryRules.DOUBLET_SIGNATURE + ": " + doublets.describe()
+                            + ", CAS held"), PHYSICS_CONFIDENCE);
+        } else if (s == DoubletWatch.ENDED || s == DoubletWatch.FAILED) {
+            long end = s == DoubletWatch.ENDED ? doublets.endNs() : now;
+            physicsFailure = s == DoubletWatch.FAILED ? doublets.failure() : null;
+            closePhysicsPoint(now, end, s == DoubletWatch.ENDED ? "ended by " + BoundaryRules.DOUBLET_SIGNATURE
+                    + ": the pilot's next input or the end of the free response" : null);
+        }
+    }
+
+    private void closePhysicsPoint(long now, long end, String note) {
+        int c = pointClass;
+        for (GuardRule r : rules[c]) {
+            r.mark();
+        }
+        close(now, end, note, NONE);
+        physicsPoint = false;
+        physicsFailure = null;
+        // the classifier's own view of the same doublet is not a second point
+        muted[c] = true;
+        muteUntilNs = doublets.releaseNs() + MUTE_AFTER_RELEASE_NS;
+        doublets.reset();
+        channel[c].reset();
+        assist[c].reset();
     }
 
     private void takeOver(int k, int j, long now, String[] top) {
@@ -676,6 +834,26 @@ public final class PointDetector implements Detector {
             }
         }
         boolean ok = true;
+        if (physicsFailure != null) {
+            ok = false;
+            ev.add("failed " + BoundaryRules.DOUBLET_SIGNATURE + ": " + physicsFailure);
+        } else if (physicsPoint) {
+            ev.add("passed " + BoundaryRules.DOUBLET_SIGNATURE + ": " + doublets.describe());
+        }
+        if (settlesFirst[k]) {
+            double share = refiner.settledShare(beginNs - SETTLED_ENTRY_NS, beginNs);
+            String line = BoundaryRules.ACCEL_SETTLED_ENTRY + String.format(Locale.ROOT, ": %.0f %% of the %.0f s"
+                    + " before the begin in settled wings-level flight (needs %.0f %%)", 100 * share,
+                    SETTLED_ENTRY_NS / 1e9, 100 * SETTLED_SHARE);
+            if (Double.isNaN(share)) {
+                ev.add("unchecked " + BoundaryRules.ACCEL_SETTLED_ENTRY + ": no bank, AoS or P");
+            } else if (share < SETTLED_SHARE) {
+                ok = false;
+                ev.add("failed " + line);
+            } else {
+                ev.add("passed " + line);
+            }
+        }
         if (gains[k]) {
             double gain = refiner.speedGain(beginNs, end);
             String line = BoundaryRules.ACCEL_GAIN + ": CAS gained " + String.format(Locale.ROOT, "%.1f", 100 * gain)
@@ -823,7 +1001,13 @@ public final class PointDetector implements Detector {
     @Override
     public void finish(long timeNs) {
         long now = lastTickNs == NONE ? timeNs : Math.max(timeNs, lastTickNs);
-        if (phase == ACTIVE) {
+        if (physicsPoint) {
+            int s = doublets.status();
+            if (s != DoubletWatch.CONFIRMED && s != DoubletWatch.ENDED) {
+                physicsFailure = "the stream ended before the response settled";
+            }
+            closePhysicsPoint(now, s == DoubletWatch.ENDED ? doublets.endNs() : now, "ended by finish");
+        } else if (phase == ACTIVE) {
             long f = edge[pointClass].fallNs();
             close(now, f != NONE && f >= beginNs ? f : now, "ended by finish", NONE);
         } else if (phase == CLOSING) {

@@ -178,11 +178,83 @@ class BoundaryRulesTest {
         assertEquals(ENDED, kept.type(), kept.evidence()::toString);
         assertTrue(s.ofType(PointEvent.Type.BEGUN).get(0).hasEvidence("entered: smoothed p(pitch-doublet) above 0.25"),
                 s.events::toString);
-        assertTrue(run(without(BoundaryRules.PHYSICS_ENTRY), 30, doublet(), unsure).events.isEmpty(),
-                "below p_on and without the rule: nothing");
+        assertTrue(run(without(BoundaryRules.PHYSICS_ENTRY, BoundaryRules.DOUBLET_SIGNATURE), 30, doublet(), unsure)
+                .events.isEmpty(), "below p_on and without the rules: nothing");
         // without the reversals the lower entry is not earned
         assertTrue(run(DetectorSettings.defaults(), 30, (t, f, x) -> SyntheticSortie.level(t, f, x), unsure)
                 .events.isEmpty());
+    }
+
+    @Test
+    void theDoubletSignatureFindsADoubletTheClassifierNeverSees() {
+        // no probability rises at all: input lobes 10-11 s (+8 deg/s) and 11-12 s (-8), a 3 deg/s response to 13 s
+        SyntheticSortie s = run(DetectorSettings.defaults(), 30, doublet());
+        PointEvent kept = s.onlyFinal();
+        assertEquals(ENDED, kept.type(), kept.evidence()::toString);
+        assertEquals(ManoeuvreKind.PITCH_DOUBLET, kept.kind());
+        assertTrue(kept.hasEvidence("passed doublet-signature: pitch-rate input from 10.000 s"), kept.evidence()::toString);
+        // begin: the 2 s of trimmed flight before the input; end: 8 s of free response after the release at 12 s
+        assertEquals(8.0, s(kept.beginNs()), 0.05);
+        assertEquals(20.0, s(kept.endNs()), 0.05);
+        PointEvent begun = s.ofType(PointEvent.Type.BEGUN).get(0);
+        // reported live once the response had been quiet for 1 s, long before the end
+        assertTrue(s(begun.reportedAtNs()) < 14.2 && s(begun.reportedAtNs()) > 13.9, begun::toString);
+        assertTrue(run(without(BoundaryRules.DOUBLET_SIGNATURE), 30, doublet()).events.isEmpty());
+    }
+
+    @Test
+    void thePilotsNextInputEndsADoubletsFreeResponse() {
+        Physics thenPull = (t, f, s) -> {
+            doublet().fill(t, f, s);
+            if (t >= 17 && t < 25) {
+                s.set(f, "Q", 2.0);
+            }
+        };
+        PointEvent kept = run(DetectorSettings.defaults(), 30, thenPull).onlyFinal();
+        assertEquals(ENDED, kept.type(), kept.evidence()::toString);
+        assertEquals(17.0, s(kept.endNs()), 0.05);
+    }
+
+    @Test
+    void aPitchUpWhileSlowingOrAPullIntoAClimbIsNoDoublet() {
+        // the same two lobes at the start of a stall's slow-down at 1.5 kt/s: the speed is not held
+        Physics slowing = (t, f, s) -> {
+            doublet().fill(t, f, s);
+            s.set(f, "KCAS", 250.0 - (t > 9 ? 1.5 * (t - 9) : 0));
+        };
+        SyntheticSortie stall = run(DetectorSettings.defaults(), 30, slowing);
+        assertTrue(stall.ofType(ENDED).isEmpty(), stall.events::toString);
+        assertTrue(stall.events.isEmpty() || stall.onlyFinal().hasEvidence("failed doublet-signature: CAS changed"),
+                stall.events::toString);
+        // 2 s of pull at 6 deg/s, then 1 s of push at 4 deg/s: the nose stays 8 deg up, the areas do not cancel
+        Physics climb = (t, f, s) -> {
+            SyntheticSortie.level(t, f, s);
+            s.set(f, "Q", t >= 10 && t < 12 ? 6.0 : t >= 12 && t < 13 ? -4.0 : 0.0);
+        };
+        assertTrue(run(DetectorSettings.defaults(), 30, climb).events.isEmpty());
+    }
+
+    @Test
+    void aLevelAccelerationOutOfAnotherManoeuvresRecoveryIsNoPoint() {
+        // the same gain, once from settled level flight, once straight out of a sideslip at 30 deg of bank
+        // the gain runs from 10 to 70 s; the classifier sees 30 to 60 s
+        Bump run = new Bump(ManoeuvreKind.LEVEL_ACCEL, 30, 60, 0.9);
+        PointEvent settled = run(DetectorSettings.defaults(), 120, accel(200, 1.0), run).onlyFinal();
+        assertEquals(ENDED, settled.type(), settled.evidence()::toString);
+        assertTrue(settled.hasEvidence("passed accel-settled-entry: 100 %"), settled.evidence()::toString);
+        Physics outOfSideslip = (t, f, s) -> {
+            accel(200, 1.0).fill(t, f, s);
+            if (t < 10) {
+                s.set(f, "Roll", 30.0);
+                s.set(f, "AoS", 10.0);
+            }
+        };
+        PointEvent unsettled = run(DetectorSettings.defaults(), 120, outOfSideslip, run).onlyFinal();
+        assertEquals(DISCARDED, unsettled.type(), unsettled.evidence()::toString);
+        assertTrue(unsettled.hasEvidence("failed accel-settled-entry: 0 % of the 5 s before the begin"),
+                unsettled.evidence()::toString);
+        PointEvent off = run(without(BoundaryRules.ACCEL_SETTLED_ENTRY), 120, outOfSideslip, run).onlyFinal();
+        assertEquals(ENDED, off.type(), off.evidence()::toString);
     }
 
     @Test

@@ -241,7 +241,10 @@ class GuardRulesInDetectorTest {
             }
             s.set(f, "Q", q);
         };
-        PointEvent kept = run(bump, 25, doublet).onlyFinal();
+        // the guard rule alone: the doublet watch, which would place the begin at its trimmed lead, is off
+        DetectorSettings ruleOnly = DetectorSettings.defaults()
+                .withDisabledRules(java.util.Set.of(BoundaryRules.DOUBLET_SIGNATURE));
+        PointEvent kept = run(ruleOnly, SyntheticSortie.dictionary(), bump, 25, doublet).onlyFinal();
         assertEquals(ENDED, kept.type(), kept.evidence()::toString);
         assertTrue(kept.hasEvidence("passed doublet-q-reversal: pitch rate reversed 2 times"), kept.evidence()::toString);
         assertEquals(ns(10.5), kept.keyInstant("input").orElseThrow());
@@ -272,7 +275,10 @@ class GuardRulesInDetectorTest {
             }
             s.set(f, "Q", q);
         };
-        PointEvent kept = run(bump, 25, doublet).onlyFinal();
+        // the guard rule alone: the doublet watch, which would place the begin at its trimmed lead, is off
+        DetectorSettings ruleOnly = DetectorSettings.defaults()
+                .withDisabledRules(java.util.Set.of(BoundaryRules.DOUBLET_SIGNATURE));
+        PointEvent kept = run(ruleOnly, SyntheticSortie.dictionary(), bump, 25, doublet).onlyFinal();
         assertEquals(ENDED, kept.type(), kept.evidence()::toString);
         assertTrue(kept.hasEvidence("passed doublet-q-reversal: pitch rate reversed 2 times"),
                 kept.evidence()::toString);

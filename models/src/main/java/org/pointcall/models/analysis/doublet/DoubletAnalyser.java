@@ -22,7 +22,8 @@ import org.pointcall.shared.kind.ManoeuvreKind;
  *
  * <ul>
  * <li>{@code release}: the detector's hint, else the last instant the elevator stood away from where it then stayed
- *     ({@link ControlRelease}); {@code input}: the hint, else the first instant it left its trim;</li>
+ *     ({@link ControlRelease}), within {@link #RELEASE_SEARCH_S} of the input when that is hinted;
+ *     {@code input}: the hint, else the first instant it left its trim;</li>
  * <li>{@code sp-frequency}, {@code sp-damping}: least-squares fit of a second-order free response with an offset,
  *     one mode shared by the pitch rate, the angle of attack and the load factor (those present; each with its own
  *     offset and amplitudes, weighted by its inverse noise variance), over the 4 s from 0.05 s after the release
@@ -37,6 +38,11 @@ import org.pointcall.shared.kind.ManoeuvreKind;
 public final class DoubletAnalyser implements ManoeuvreAnalyser {
     static final double FIT_DELAY_S = 0.05;
     static final double FIT_LENGTH_S = 4.0;
+    /**
+     * With a known input, its release is looked for up to this long after it: a doublet's two halves take a few
+     * seconds at most (common practice), and the 2 s the control must then stay put fit in too.
+     */
+    static final double RELEASE_SEARCH_S = 6.0;
     private static final double ELEVATOR_FLOOR_RAD = Math.toRadians(0.2);
     /** The responses fitted together: the short period shows in all three. */
     static final List<String> RESPONSES = List.of("Q", "AoA", "Nz");
@@ -58,10 +64,13 @@ public final class DoubletAnalyser implements ManoeuvreAnalyser {
         double endS = (endNs - beginNs) * 1e-9;
         Series elevator = history.has("Elevator") ? Series.cleanOf(history, "Elevator", beginNs) : null;
         double release = hint(hintedInstantsNs, "release", beginNs);
-        if (Double.isNaN(release) && elevator != null) {
-            release = ControlRelease.lastMove(elevator, 0.0, endS, 2.0, ELEVATOR_FLOOR_RAD);
-        }
         double input = hint(hintedInstantsNs, "input", beginNs);
+        if (Double.isNaN(release) && elevator != null) {
+            // with the input known, the release is looked for only in the seconds after it: the pilot's next input,
+            // at the end of the free response, is not the doublet's release
+            double to = Double.isFinite(input) ? Math.min(endS, input + RELEASE_SEARCH_S) : endS;
+            release = ControlRelease.lastMove(elevator, 0.0, to, 2.0, ELEVATOR_FLOOR_RAD);
+        }
         if (Double.isNaN(input) && elevator != null && Double.isFinite(release)) {
             input = firstDeparture(elevator.between(0.0, release));
         }
