@@ -60,6 +60,11 @@ public final class CardSession {
     /** History kept before a point's begin and while idle, s: covers a begin reported late and rates before it. */
     public static final double PREROLL_S = 60.0;
     /**
+     * The note of a point with a hold time whose begin was moved back to where its throughout bands were first all
+     * held ({@link PhaseJudge#onConditionSince}): the detector sees a steady hold only some seconds into it.
+     */
+    public static final String ON_CONDITION_NOTE = "on condition from";
+    /**
      * A completed flight of a card point that begins within this of the end of a discarded stretch of the same
      * point, with nothing between them, is one flight: the detector lost the point for a moment (seen on turning
      * stalls, whose entry it discarded and whose recovery it kept). It is analysed from the discarded stretch's
@@ -384,6 +389,16 @@ public final class CardSession {
                         a.point.id());
                 // the detector's instants were found on the kept stretch alone: the analysis finds them again
                 a.hints.clear();
+            }
+            if (a.point != null && a.point.hasHold() && joined == null && !history.isEmpty()) {
+                long floor = Math.max(history.firstNs(), prev == null ? Long.MIN_VALUE : prev.endNs());
+                long on = PhaseJudge.onConditionSince(a.point, history, begin, floor);
+                if (on < begin) {
+                    joined = String.format(java.util.Locale.ROOT, ON_CONDITION_NOTE + " %.1f s, the detector's"
+                            + " begin %.1f s: every throughout band of %s was held from there", on / 1e9,
+                            begin / 1e9, a.point.id());
+                    begin = on;
+                }
             }
             o = judge(a, e, begin, joined);
         }

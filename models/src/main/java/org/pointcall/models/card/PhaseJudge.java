@@ -239,6 +239,43 @@ public final class PhaseJudge {
         return n < 3 || !(den > 0) ? Double.NaN : (n * stv - st * sv) / den;
     }
 
+    /**
+     * For a point with a hold time: the earliest time, no earlier than {@code floorNs} nor the hold time before
+     * {@code beginNs}, from which every throughout band with a recorded parameter stayed inside up to
+     * {@code beginNs} (samples without a value tell nothing); {@code beginNs} itself when one was outside at the
+     * begin. A stabilised point is on condition before the classifier has seen enough of the hold to call it, and the
+     * hold counts from when it was.
+     */
+    public static long onConditionSince(TestPoint point, PointHistory h, long beginNs, long floorNs) {
+        long from = Math.max(floorNs, beginNs - Math.round(point.holdS() * 1e9));
+        long since = from;
+        boolean any = false;
+        for (Band b : point.bands()) {
+            if (b.phase() != org.pointcall.shared.card.BandPhase.THROUGHOUT || b.parameter() == null
+                    || !h.has(b.parameter())) {
+                continue;
+            }
+            any = true;
+            long earliest = beginNs;
+            int i = h.firstAtOrAfter(beginNs);
+            if (i >= h.size()) {
+                i = h.size() - 1;
+            }
+            for (; i >= 0 && h.timeNs(i) >= from; i--) {
+                double v = h.valueSi(b.parameter(), i);
+                if (!Double.isFinite(v)) {
+                    continue;
+                }
+                if (!b.contains(v)) {
+                    break;
+                }
+                earliest = Math.min(earliest, h.timeNs(i));
+            }
+            since = Math.max(since, earliest);
+        }
+        return any ? Math.min(since, beginNs) : beginNs;
+    }
+
     private static final class Span {
         int samples;
         double outsideS;

@@ -156,6 +156,26 @@ class PhaseJudgeTest {
     }
 
     @Test
+    void aHoldCountsFromWhenThePointWasOnConditionNotFromTheDetectedBegin() {
+        Band kcas = Band.ofTarget("KCAS", null, BandPhase.THROUGHOUT, null, Double.NaN, Unit.KNOT, 250, 2, 2);
+        // setting up at 260 kt until 8 s, on condition from 8 s; the detector began the point at 20 s
+        PointHistory h = history("KCAS", 60, t -> t < 8 ? 260 : 250);
+        TestPoint p = point(ManoeuvreKind.STABILISED, 30, kcas);
+        long on = PhaseJudge.onConditionSince(p, h, 20 * S, 0);
+        assertEquals(8.0, on / 1e9, 1.0 / 64);
+        // never further back than the hold, nor than the floor (the previous point's end)
+        assertEquals(10.0, PhaseJudge.onConditionSince(point(ManoeuvreKind.STABILISED, 10, kcas), h, 20 * S, 0) / 1e9,
+                1.0 / 64);
+        assertEquals(12.0, PhaseJudge.onConditionSince(p, h, 20 * S, 12 * S) / 1e9, 1.0 / 64);
+        // outside at the begin: the begin stays
+        PointHistory off = history("KCAS", 60, t -> t < 21 ? 260 : 250);
+        assertEquals(20 * S, PhaseJudge.onConditionSince(p, off, 20 * S, 0));
+        // from the detected begin the 30 s hold is not there (20 to 45 s), from on condition it is
+        assertFalse(PhaseJudge.judge(p, 0, h, 20 * S, 45 * S, Map.of(), Map.of()).result().held());
+        assertTrue(PhaseJudge.judge(p, 0, h, on, 45 * S, Map.of(), Map.of()).result().held());
+    }
+
+    @Test
     void resultBandsUseTheMetricAndOpenBandsHaveAMarginOnTheirEdge() {
         Band loss = Band.ofRange(null, "altitude-loss", BandPhase.RESULT, null, Double.NaN, Unit.FOOT,
                 Double.NEGATIVE_INFINITY, 800);
