@@ -11,6 +11,8 @@
  * from frames; {@link org.pointcall.models.detect.BoundaryRules boundary rules}, named and switchable the same way,
  * that place a found point's begin and end from the physics (where the aircraft left its steady entry, where it was
  * back in steady flight, the whole gain of a level acceleration, the whole hold of a stabilised point).
+ * One boundary rule finds points without the classifier: {@code doublet-signature}
+ * ({@code DoubletWatch}), a pitch doublet seen in the pitch rate alone.
  * {@link org.pointcall.models.detect.PointDetector} arbitrates: one open point at a time, takeover by
  * another kind (a {@link org.pointcall.models.detect.KindSwitch} keeps it one point), gaps merged, minimum
  * durations, rules judged at the end. {@link org.pointcall.models.detect.DetectorSettings} holds every threshold.
