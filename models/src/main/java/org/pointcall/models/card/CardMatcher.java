@@ -60,11 +60,30 @@ public final class CardMatcher {
 
     /** Binds a detection of {@code kind}: the card point it is, marked flying; empty for an unplanned one. */
     public Optional<TestPoint> bind(ManoeuvreKind kind) {
+        int i = choose(kind);
+        if (i < 0) {
+            return Optional.empty();
+        }
+        if (i == armed) {
+            armed = -1;
+            states[i] = before[i];
+        }
+        before[i] = states[i];
+        states[i] = CardPointState.FLYING;
+        return Optional.of(card.points().get(i));
+    }
+
+    /** The card point a detection of {@code kind} would bind to now, changing nothing. */
+    public Optional<TestPoint> peek(ManoeuvreKind kind) {
+        int i = choose(kind);
+        return i < 0 ? Optional.empty() : Optional.of(card.points().get(i));
+    }
+
+    /** The armed point of that kind, else the first awaiting flight, else the first to repeat; -1 for none. */
+    private int choose(ManoeuvreKind kind) {
         int i = -1;
         if (armed >= 0 && card.points().get(armed).kind() == kind) {
             i = armed;
-            armed = -1;
-            states[i] = before[i];
         }
         for (int j = 0; i < 0 && j < states.length; j++) {
             if (card.points().get(j).kind() == kind && states[j].awaitsFlight() && j != armed) {
@@ -76,12 +95,7 @@ public final class CardMatcher {
                 i = j;
             }
         }
-        if (i < 0) {
-            return Optional.empty();
-        }
-        before[i] = states[i];
-        states[i] = CardPointState.FLYING;
-        return Optional.of(card.points().get(i));
+        return i;
     }
 
     /** The flight bound to {@code cardId} is no longer this point (its detection changed kind): undo the bind. */

@@ -119,6 +119,21 @@ public final class CardSession {
     static final long POST_ROLL_NS = 3_000_000_000L;
     /** An ENDED event waiting for its post-roll, or null. */
     private PointEvent heldEnd;
+    /** Flies a card point with a hold from its condition when the classifier does not call it. */
+    private final ConditionWatch condition = new ConditionWatch();
+    /** Id of the open point flown from its condition, or 0. */
+    private long conditionPoint;
+    private long conditionPoints;
+    /** The last such point's end: a stabilised detection beginning before it is the same flight. */
+    private long conditionEndNs = Long.MIN_VALUE;
+    /** Detections taken into a point flown from its condition: their events are not a flight of their own. */
+    private final java.util.Set<Long> swallowed = new java.util.HashSet<>();
+    /** Ids of points flown from their condition start here, far above the detector's own. */
+    static final long CONDITION_IDS = 1_000_000_000L;
+    /** On condition this long, the point is begun (from when it came on condition), ns. */
+    static final long ON_CONDITION_BEGIN_NS = 5_000_000_000L;
+    /** The evidence line of a point flown from its condition. */
+    public static final String CONDITION_EVIDENCE = "on condition:";
     private long currentFrameNs;
     private boolean pending;
     private long pendingNs;
@@ -232,6 +247,7 @@ public final class CardSession {
         if (heldEnd != null && t >= heldEnd.endNs() + POST_ROLL_NS) {
             releaseHeldEnd();
         }
+        watchCondition(t);
         if (lastTrimNs == Long.MIN_VALUE || t - lastTrimNs > 5_000_000_000L) {
             lastTrimNs = t;
             long keep = (active == null ? t : Math.min(t, active.beginNs)) - prerollNs;
@@ -250,6 +266,9 @@ public final class CardSession {
         long t = frames == 0 ? 0 : lastFrameNs;
         applyCommands(t);
         if (frames > 0) {
+            if (conditionPoint != 0) {
+                endCondition(lastFrameNs, condition.lastOnNs(), "ended by finish");
+            }
             finishing = true;
             releaseHeldEnd();
             detector.finish(lastFrameNs);
@@ -286,7 +305,70 @@ public final class CardSession {
 
     // ------------------------------------------------------------------------------------ detector events
 
+    /**
+     * A stabilised card point the classifier does not call (it sees a hold only some way into it, on an airframe
+     * not trained on, never): when no point is open, the point the next stabilised detection would bind to is
+     * watched ({@link ConditionWatch}); on condition for {@link #ON_CONDITION_BEGIN_NS}, it is begun from when it came
+     * on condition, and it ends when the condition breaks. A stabilised detection meanwhile is the same flight; any
+     * other kind ends it.
+     */
+    private void watchCondition(long t) {
+        if (matcher == null || finishing) {
+            return;
+        }
+        if (conditionPoint != 0) {
+            condition.update(condition.point(), history, t);
+            if (condition.broken(t)) {
+                endCondition(t, condition.lastOnNs(), "left condition: " + condition.offBand() + " outside");
+            }
+            return;
+        }
+        if (active != null || heldEnd != null) {
+            condition.reset();
+            return;
+        }
+        TestPoint p = matcher.peek(ManoeuvreKind.STABILISED).orElse(null);
+        if (p == null || !ConditionWatch.watchable(p, history)) {
+            condition.reset();
+            return;
+        }
+        condition.update(p, history, t);
+        if (condition.onForNs(t) >= ON_CONDITION_BEGIN_NS) {
+            conditionPoint = CONDITION_IDS + ++conditionPoints;
+            onPointEvent(new PointEvent(PointEvent.Type.BEGUN, conditionPoint, ManoeuvreKind.STABILISED,
+                    condition.onSinceNs(), PointEvent.UNKNOWN_NS, t, t, 1.0, List.of(),
+                    List.of(CONDITION_EVIDENCE + " every throughout band of " + p.id() + " inside from "
+                            + String.format(java.util.Locale.ROOT, "%.1f", condition.onSinceNs() / 1e9) + " s")));
+        }
+    }
+
+    private void endCondition(long now, long endNs, String why) {
+        long id = conditionPoint;
+        conditionPoint = 0;
+        long begin = active != null && active.detection == id ? active.beginNs : endNs;
+        long end = Math.max(begin, endNs);
+        conditionEndNs = end;
+        condition.reset();
+        onPointEvent(new PointEvent(PointEvent.Type.ENDED, id, ManoeuvreKind.STABILISED, begin, end, now,
+                begin, 1.0, List.of(), List.of(CONDITION_EVIDENCE + " " + why)));
+    }
+
     private void onPointEvent(PointEvent e) {
+        if (e.pointId() < CONDITION_IDS) {
+            if (swallowed.contains(e.pointId())) {
+                return;
+            }
+            if (e.type() == PointEvent.Type.BEGUN && e.kind() == ManoeuvreKind.STABILISED
+                    && (conditionPoint != 0 || e.beginNs() < conditionEndNs)) {
+                // the classifier has seen the hold that is already being flown from its condition
+                swallowed.add(e.pointId());
+                return;
+            }
+            if (e.type() == PointEvent.Type.BEGUN && conditionPoint != 0) {
+                endCondition(e.reportedAtNs(), Math.min(e.beginNs(), condition.lastOnNs()),
+                        e.kind().key() + " began");
+            }
+        }
         switch (e.type()) {
             case BEGUN -> {
                 releaseHeldEnd();

@@ -16,7 +16,7 @@ import org.pointcall.shared.outcome.Reason;
  * {@link #ENTRY_SPAN_S} up to the begin; {@code throughout} every sample from the begin to where the kind's
  * technique ends (the stall break, the wind-up's highest g, else the end), less a lead-in before the value first
  * comes inside ({@link #LEAD_IN_S}): held when the time outside is at most {@link #TRANSIENT_S} or, for a point
- * with a hold time, when one unbroken stretch inside lasts the hold; {@code rate} the least-squares slope over the
+ * with a hold time, when one stretch inside (excursions up to {@link #HOLD_BRIDGE_S} bridged) lasts the hold; {@code rate} the least-squares slope over the
  * band's interval before its key instant; {@code instant} the mean over {@link #INSTANT_SPAN_S} around the instant;
  * {@code result} the analysis metric. No value is never held.
  */
@@ -39,6 +39,11 @@ public final class PhaseJudge {
      * (the gear still travelling, the bank still being rolled in).
      */
     public static final double LEAD_IN_S = 10.0;
+    /**
+     * A hold is one stretch inside, but an excursion no longer than this does not break it, s: a wild point or a
+     * sample of sensor noise beyond a tight band (Nz +/- 0.05 g) is not the pilot losing the condition.
+     */
+    public static final double HOLD_BRIDGE_S = 0.25;
     /** Gaps between samples longer than this count only this much towards time outside or inside, s. */
     private static final double MAX_STEP_S = 0.5;
 
@@ -288,6 +293,7 @@ public final class PhaseJudge {
         Span s = new Span();
         double worstMargin = Double.POSITIVE_INFINITY;
         double run = 0;
+        double out = 0;
         long prevNs = Long.MIN_VALUE;
         long leadInNs = Math.round(LEAD_IN_S * 1e9);
         for (int i = h.firstAtOrAfter(fromNs); i < h.size() && h.timeNs(i) <= toNs; i++) {
@@ -314,11 +320,18 @@ public final class PhaseJudge {
                         s.worstSi = v;
                     }
                 }
+                if (out > 0 && out <= HOLD_BRIDGE_S) {
+                    run += out; // a wild point or a noise sample does not break a hold
+                }
+                out = 0;
                 run += stepS;
                 s.longestInsideS = Math.max(s.longestInsideS, run);
             } else {
                 s.outsideS += stepS;
-                run = 0;
+                out += stepS;
+                if (out > HOLD_BRIDGE_S) {
+                    run = 0;
+                }
             }
         }
         return s;
