@@ -129,7 +129,7 @@ public final class CardSession {
     /** Detections taken into a point flown from its condition: their events are not a flight of their own. */
     private final java.util.Set<Long> swallowed = new java.util.HashSet<>();
     /** Ids of points flown from their condition start here, far above the detector's own. */
-    static final long CONDITION_IDS = 1_000_000_000L;
+    public static final long CONDITION_IDS = 1_000_000_000L;
     /** On condition this long, the point is begun (from when it came on condition), ns. */
     static final long ON_CONDITION_BEGIN_NS = 5_000_000_000L;
     /** The evidence line of a point flown from its condition. */

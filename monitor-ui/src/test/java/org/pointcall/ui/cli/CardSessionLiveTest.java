@@ -202,6 +202,53 @@ class CardSessionLiveTest {
         assertEquals(List.of("LP-A"), s.notFlown());
     }
 
+    /** The Sparrel's 20 s hold at M 0.24 and 12,000 ft (its verdict card's TP-2), with {@code mach} as the target. */
+    private static TestCard sparrelHold(double mach) {
+        return CardFiles.parse(String.join("\n",
+                "sortie: T-10", "airframe: sparrel-a1", "points:",
+                "  - id: TP-2", "    kind: stabilised", "    title: Stabilised point", "    hold: 20", "    bands:",
+                "      - {parameter: Mach, phase: throughout, target: " + mach + ", tol: 0.005, unit: Mach}",
+                "      - {parameter: Hp, phase: throughout, target: 12000, tol: 100, unit: ft}",
+                "      - {parameter: Nz, phase: throughout, target: 1.0, tol: 0.05, unit: g}",
+                "      - {metric: hold-time, phase: result, min: 20, unit: s}", ""), "hold.yaml", DICT);
+    }
+
+    /**
+     * A stabilised point on an airframe the default model never saw (the Sparrel; its classifier never calls this
+     * hold, 0 of 16 on the held-out verdict set): the session flies it from its card condition, begun after 5 s on
+     * condition from when it came on condition, ended when the condition broke, and judges it. With the card's
+     * Mach 0.06 off what was flown there is no condition and no flight.
+     */
+    @Test
+    void aStabilisedPointTheClassifierMissesIsFlownFromItsCondition() {
+        TestCard card = sparrelHold(0.24);
+        List<Frame> frames = new ArrayList<>();
+        org.pointcall.ingest.sim.truth.SortieTruth truth = new SortieSimulator(Airframes.load("sparrel-a1"), card,
+                DICT, 31, 64, SensorSettings.DEFAULT, PilotSettings.NO_FLAWS).run(List.of(f -> frames.add(f.copy())));
+        org.pointcall.ingest.sim.truth.PointTruth tp = truth.points().get(0);
+        List<SessionEvent> events = new ArrayList<>();
+        CardSession s = new CardSession(SessionSetup.of(DICT, card, model.model(), model.metadata().description(),
+                CardAnalysers.standard()), events::add);
+        frames.forEach(s::onFrame);
+        s.finish();
+        PointOutcome o = s.outcomes().stream().filter(x -> "TP-2".equals(x.cardId())).findFirst().orElseThrow(
+                () -> new AssertionError("TP-2 not flown: " + s.outcomes()));
+        assertTrue(o.detection() >= CardSession.CONDITION_IDS, "flown from its condition, not the classifier: " + o);
+        assertEquals(tp.inBands() ? Verdict.GOOD : Verdict.REPEAT, o.verdict(), o.reasons()::toString);
+        // the flight covers the pilot's hold: on condition from before it began (here from the start of the sortie,
+        // trimmed near the condition, 22 s before the pilot's hold), to its end
+        assertTrue(o.beginNs() / 1e9 <= tp.beginS() + 0.5,
+                o.beginNs() / 1e9 + " s against the true " + tp.beginS());
+        assertTrue(o.endNs() / 1e9 >= tp.endS() - 0.5, o.endNs() / 1e9 + " s against the true " + tp.endS());
+
+        CardSession off = new CardSession(SessionSetup.of(DICT, sparrelHold(0.30), model.model(),
+                model.metadata().description(), CardAnalysers.standard()), e -> { });
+        frames.forEach(off::onFrame);
+        off.finish();
+        assertTrue(off.outcomes().stream().noneMatch(x -> x.detection() >= CardSession.CONDITION_IDS),
+                off.outcomes()::toString);
+    }
+
     @Test
     void aStreamThatStopsMidPointLeavesItIncomplete() {
         List<SessionEvent> events = new ArrayList<>();
