@@ -214,21 +214,40 @@ final class BoundaryRefiner {
         }
     }
 
-    /** Steady flight at kept state {@code i}: rates, bank and flight-path angle small (NaN quantities skipped). */
-    private boolean steady(int i) {
+    /**
+     * The bottom of a stall's pull-out: the first sample after the break at {@code core} where the flight path is
+     * back within the steady flight-path angle of level or climbing, having dived below it; {@code core} when it never
+     * dived; -1 while it is still diving. The recovery is over there once the rates are steady: a pilot who climbs
+     * away to regain the height lost is recovered, not yet in level flight.
+     */
+    private int pullOutBottom(int core, int i1) {
+        boolean dived = false;
+        for (int i = core; i < i1; i++) {
+            if (!Double.isFinite(gamma[i])) {
+                continue;
+            }
+            if (gamma[i] < -s.steadyGammaRad()) {
+                dived = true;
+            } else if (dived) {
+                return i;
+            }
+        }
+        return dived ? -1 : core;
+    }
+
+    /** Rates and bank steady at kept state {@code i}, whatever the flight-path angle. */
+    private boolean steadyRates(int i) {
         double p = h.value(i, PhysicalQuantity.P);
         double q = h.value(i, PhysicalQuantity.Q);
         double bank = h.value(i, PhysicalQuantity.ROLL);
-        if (Double.isFinite(p) && Math.abs(p) >= s.steadyRollRateRadS()) {
-            return false;
-        }
-        if (Double.isFinite(q) && Math.abs(q) >= s.steadyPitchRateRadS()) {
-            return false;
-        }
-        if (Double.isFinite(bank) && Math.abs(bank) >= s.steadyBankRad()) {
-            return false;
-        }
-        return !Double.isFinite(gamma[i]) || Math.abs(gamma[i]) < s.steadyGammaRad();
+        return !(Double.isFinite(p) && Math.abs(p) >= s.steadyRollRateRadS())
+                && !(Double.isFinite(q) && Math.abs(q) >= s.steadyPitchRateRadS())
+                && !(Double.isFinite(bank) && Math.abs(bank) >= s.steadyBankRad());
+    }
+
+    /** Steady flight at kept state {@code i}: rates, bank and flight-path angle small (NaN quantities skipped). */
+    private boolean steady(int i) {
+        return steadyRates(i) && (!Double.isFinite(gamma[i]) || Math.abs(gamma[i]) < s.steadyGammaRad());
     }
 
     /**
@@ -318,9 +337,14 @@ final class BoundaryRefiner {
         if (core < 0) {
             return NONE;
         }
+        boolean stall = kind == ManoeuvreKind.STALL_LEVEL || kind == ManoeuvreKind.STALL_TURN;
+        int from = stall ? pullOutBottom(core, i1) : core;
+        if (from < 0) {
+            return NONE;
+        }
         int start = -1;
-        for (int i = core; i < i1; i++) {
-            if (!steady(i)) {
+        for (int i = from; i < i1; i++) {
+            if (!(stall ? steadyRates(i) : steady(i))) {
                 start = -1;
                 continue;
             }
@@ -418,6 +442,20 @@ final class BoundaryRefiner {
             }
         }
         return -1;
+    }
+
+    /**
+     * A stall's break between {@code beginNs} and {@code endNs} (the first AoA maximum it lets go of, as
+     * {@code end-recovery} finds it); NONE when there is none.
+     */
+    long stallBreak(ManoeuvreKind kind, long beginNs, long endNs) {
+        int i0 = h.indexAtOrAfter(beginNs);
+        int i1 = h.indexAtOrAfter(endNs + 1);
+        if (i1 - i0 < 4) {
+            return NONE;
+        }
+        int core = core(kind, i0, i1, i1);
+        return core < 0 ? NONE : h.timeNs(core);
     }
 
     /**

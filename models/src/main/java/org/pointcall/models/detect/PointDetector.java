@@ -521,6 +521,27 @@ public final class PointDetector implements Detector {
         return b;
     }
 
+    /**
+     * The departure anchor once the point is over: for a stall whose break is known, the start of the steady
+     * slowing that runs into the break (a slow set-up before the entry, in the approach configuration, is its own
+     * run of slowing, separate from the entry by a steady stretch); else as live.
+     */
+    private long finalAnchor(int c, ManoeuvreKind kind, long b, long end) {
+        if (kind == ManoeuvreKind.STALL_LEVEL || kind == ManoeuvreKind.STALL_TURN) {
+            long brk = refiner.stallBreak(kind, b, end);
+            if (brk != NONE) {
+                long d = refiner.decelBegin(brk - BREAK_LEAD_NS, lastEndNs);
+                if (d != NONE) {
+                    return d;
+                }
+            }
+        }
+        return departureAnchor(c, b);
+    }
+
+    /** The entry's slowing is looked for this long before the break (the break itself may be slowing no more). */
+    private static final long BREAK_LEAD_NS = 1_000_000_000L;
+
     /** The switch that keeps the open point on: its channel, or the lower one it entered by with its rules. */
     private Hysteresis gate(int k) {
         return pointAssisted ? assist[k] : channel[k];
@@ -988,7 +1009,8 @@ public final class PointDetector implements Detector {
         }
         if (departs[k] || accelerates[k]) {
             String rule = departs[k] ? BoundaryRules.BEGIN_DEPARTURE : BoundaryRules.ACCEL_EXTENT;
-            long b = departs[k] ? refiner.departureBegin(departureAnchor(k, classifierBeginNs), lastEndNs, now)
+            long b = departs[k] ? refiner.departureBegin(finalAnchor(k, kind, classifierBeginNs, refinedEndNs),
+                    lastEndNs, now)
                     : refiner.accelBegin(classifierBeginNs, lastEndNs);
             if (b != NONE && b != beginNs && b < refinedEndNs && (lastEndNs == NONE || b >= lastEndNs)) {
                 ev.add("begin moved to " + rule + " at " + seconds(b) + " s from " + seconds(beginNs) + " s");

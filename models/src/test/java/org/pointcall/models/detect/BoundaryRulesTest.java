@@ -103,6 +103,41 @@ class BoundaryRulesTest {
         };
     }
 
+    /**
+     * A wings-level stall after a set-up: slowing at 0.5 kt/s to 6 s (the approach configuration), steady to 10 s,
+     * the entry at 1 kt/s to the break at 20 s, a dive at 10 deg to 26 s, then a steady climb away at 5 deg to
+     * regain the height.
+     */
+    private static Physics stallThenClimb() {
+        SplittableRandom r = new SplittableRandom(13L);
+        return (t, f, s) -> {
+            SyntheticSortie.level(t, f, s);
+            double kcas = t < 6 ? 160 - 0.5 * t : t < 10 ? 157 : t < 20 ? 157 - (t - 10) : t < 26 ? 147 + 2 * (t - 20)
+                    : 159;
+            s.set(f, "KCAS", kcas + 0.1 * (2 * r.nextDouble() - 1));
+            double aoa = t < 10 ? 4 : t < 20 ? 4 + 1.2 * (t - 10) : t < 22 ? 16 - 6 * (t - 20) : 4;
+            s.set(f, "AoA", aoa + 0.2 * (2 * r.nextDouble() - 1));
+            s.set(f, "Nz", t < 20 ? 1.0 : t < 22 ? 0.7 : t < 26 ? 1.5 : 1.0);
+            s.set(f, "Q", t >= 20 && t < 22 ? -5.0 : t >= 22 && t < 26 ? 5.0 : 0.0);
+            s.set(f, "Pitch", t < 20 ? aoa - 1.0 : t < 26 ? -10.0 : 9.0);
+            // 250 ft/s of true airspeed: -43 ft/s in the dive, +22 ft/s in the climb
+            s.set(f, "Hp", t < 20 ? 10000 : t < 26 ? 10000 - 43 * (t - 20) : 10000 - 43 * 6 + 22 * (t - 26));
+        };
+    }
+
+    @Test
+    void aStallsEntryIsTheSlowingIntoItsBreakAndItsRecoveryEndsAtThePullOutsBottom() {
+        // the classifier rises in the set-up, at 3 s, and holds the stall to 24 s
+        Bump early = new Bump(ManoeuvreKind.STALL_LEVEL, 3, 24, 0.9);
+        PointEvent kept = run(DetectorSettings.defaults(), 60, stallThenClimb(), early).onlyFinal();
+        assertEquals(ENDED, kept.type(), kept.evidence()::toString);
+        assertEquals(20.0, s(kept.keyInstant("break").orElseThrow()), 0.3);
+        // the set-up's slowing is a run of its own: the entry begins where the slowing into the break began
+        assertEquals(10.0, s(kept.beginNs()), 0.6, kept.evidence()::toString);
+        // climbing away is recovered: the end is 2 s of steady rates after the dive's bottom, not level flight
+        assertEquals(28.0, s(kept.endNs()), 0.6, kept.evidence()::toString);
+    }
+
     @Test
     void aTurningStallLostBeforeItsBreakIsKeptToItsRecoveryAndToldByItsBank() {
         // the classifier calls it wings-level and loses it a second before the break
