@@ -58,10 +58,16 @@ public final class PointcallCommand implements Runnable {
         return newCommandLine().execute(args);
     }
 
+    /** Width of the help text, characters. */
+    static final int USAGE_WIDTH = 110;
+
     public static CommandLine newCommandLine() {
         CommandLine cl = new CommandLine(new PointcallCommand());
         cl.setExecutionExceptionHandler(PointcallCommand::onExecutionException);
         cl.setParameterExceptionHandler(PointcallCommand::onParameterException);
+        // the descriptions are written as lines of up to about 100 characters; at picocli's 80 every one of them
+        // would be broken again mid-line
+        cl.setUsageHelpWidth(USAGE_WIDTH);
         return cl;
     }
 
