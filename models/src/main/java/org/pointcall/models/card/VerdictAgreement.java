@@ -19,6 +19,7 @@ import org.pointcall.shared.outcome.Verdict;
 public final class VerdictAgreement {
     private final List<String> sorties = new ArrayList<>();
     private final List<String> disagreements = new ArrayList<>();
+    private final List<String> missed = new ArrayList<>();
     private int points;
     private int detected;
     private int agree;
@@ -45,6 +46,7 @@ public final class VerdictAgreement {
             PointOutcome flown = null;
             boolean anyAbandoned = false;
             boolean other = false;
+            String boundTo = null;
             for (PointOutcome o : outcomes) {
                 if (o.endNs() < b || o.beginNs() > e || !o.kind().equals(t.kind())) {
                     continue;
@@ -57,6 +59,7 @@ public final class VerdictAgreement {
                     }
                 } else {
                     other = true;
+                    boundTo = o.cardId() == null ? "flown as an unplanned " + o.kind() : "bound to " + o.cardId();
                 }
             }
             if (flown == null) {
@@ -65,6 +68,9 @@ public final class VerdictAgreement {
                 } else if (anyAbandoned) {
                     abandoned++;
                 }
+                missed.add(name + " " + t.cardId() + " " + t.kind() + String.format(Locale.ROOT, " %.1f to %.1f s: ",
+                        t.beginS(), t.endS()) + (other ? boundTo : anyAbandoned
+                        ? "abandoned" : "not detected"));
                 continue;
             }
             detected++;
@@ -114,6 +120,11 @@ public final class VerdictAgreement {
         return agree;
     }
 
+    /** The true points with no completed flight of their own, one line each: why. */
+    public List<String> missed() {
+        return List.copyOf(missed);
+    }
+
     /** Agreement on the detected points, 0 to 1 (NaN when none was detected). */
     public double agreement() {
         return detected == 0 ? Double.NaN : (double) agree / detected;
@@ -134,12 +145,17 @@ public final class VerdictAgreement {
         l.add("verdicts.unplanned: " + unplanned);
         l.add("verdicts.agree: " + agree);
         l.add(String.format(Locale.ROOT, "verdicts.agreement: %.4f", agreement()));
+        l.add(String.format(Locale.ROOT, "verdicts.agreement-of-all: %.4f",
+                points == 0 ? Double.NaN : (double) agree / points));
         l.add("verdicts.good-and-inside: " + goodInside);
         l.add("verdicts.repeat-and-outside: " + repeatOutside);
         l.add("verdicts.good-but-outside: " + goodOutside);
         l.add("verdicts.repeat-but-inside: " + repeatInside);
         for (String d : disagreements) {
             l.add("verdicts.disagree: " + d);
+        }
+        for (String m : missed) {
+            l.add("verdicts.missed: " + m);
         }
         return l;
     }
