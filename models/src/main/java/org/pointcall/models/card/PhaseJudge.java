@@ -16,7 +16,8 @@ import org.pointcall.shared.outcome.Reason;
  * {@link #ENTRY_SPAN_S} up to the begin; {@code throughout} every sample from the begin to where the kind's
  * technique ends (the stall break, the wind-up's highest g, else the end), less a lead-in before the value first
  * comes inside ({@link #LEAD_IN_S}): held when the time outside is at most {@link #TRANSIENT_S} or, for a point
- * with a hold time, when one stretch inside (excursions up to {@link #HOLD_BRIDGE_S} bridged) lasts the hold; {@code rate} the least-squares slope over the
+ * with a hold time, when one stretch inside (excursions up to {@link #HOLD_BRIDGE_S} bridged) lasts the hold;
+ * {@code rate} the least-squares slope over the
  * band's interval before its key instant; {@code instant} the mean over {@link #INSTANT_SPAN_S} around the instant;
  * {@code result} the analysis metric. No value is never held.
  */

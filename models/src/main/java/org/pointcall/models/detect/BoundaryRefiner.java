@@ -597,7 +597,8 @@ final class BoundaryRefiner {
         if (kind == ManoeuvreKind.LEVEL_ACCEL || kind == ManoeuvreKind.STABILISED) {
             return Double.isFinite(h.value(last, PhysicalQuantity.CAS));
         }
-        return Double.isFinite(h.value(last, PhysicalQuantity.P)) || Double.isFinite(h.value(last, PhysicalQuantity.ROLL));
+        return Double.isFinite(h.value(last, PhysicalQuantity.P))
+                || Double.isFinite(h.value(last, PhysicalQuantity.ROLL));
     }
 
     /** Median |bank| from {@code beginNs} to the AoA maximum before {@code endNs}; NaN without bank or AoA. */
@@ -661,6 +662,31 @@ final class BoundaryRefiner {
             }
         }
         return seen == 0 ? Double.NaN : settled / (double) seen;
+    }
+
+    /** Least-squares slope of Hp from {@code beginNs} to {@code endNs}, m/s; NaN with fewer than 3 samples. */
+    double hpRate(long beginNs, long endNs) {
+        int i0 = h.indexAtOrAfter(beginNs);
+        int i1 = h.indexAtOrAfter(endNs + 1);
+        double st = 0;
+        double sv = 0;
+        double stt = 0;
+        double stv = 0;
+        int n = 0;
+        for (int i = i0; i < i1; i++) {
+            double v = h.value(i, PhysicalQuantity.HP);
+            if (!Double.isFinite(v)) {
+                continue;
+            }
+            double t = (h.timeNs(i) - beginNs) * 1e-9;
+            st += t;
+            sv += v;
+            stt += t * t;
+            stv += t * v;
+            n++;
+        }
+        double den = n * stt - st * st;
+        return n < 3 || !(den > 0) ? Double.NaN : (n * stv - st * sv) / den;
     }
 
     /** Relative CAS gain from {@code beginNs} to {@code endNs} (means over 2 s); NaN without CAS. */

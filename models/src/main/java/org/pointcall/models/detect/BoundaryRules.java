@@ -25,6 +25,11 @@ public final class BoundaryRules {
      * the start speed, then full power), not out of another manoeuvre's recovery with the power already up.
      */
     public static final String ACCEL_SETTLED_ENTRY = "accel-settled-entry";
+    /**
+     * A level acceleration is flown level: its altitude drifts by at most 100 ft a minute (least squares over the
+     * point), not a speed-up in a climb to the next point's altitude.
+     */
+    public static final String ACCEL_LEVEL = "accel-level";
     /** A level acceleration must gain a good share of its entry speed: the whole point is judged on it. */
     public static final String ACCEL_GAIN = "accel-gain";
     /**
@@ -42,7 +47,8 @@ public final class BoundaryRules {
 
     /** Every boundary rule name, in documentation order. */
     public static final List<String> NAMES = List.of(BEGIN_DEPARTURE, END_RECOVERY, ACCEL_EXTENT, ACCEL_GAIN,
-            ACCEL_SETTLED_ENTRY, DOUBLET_SIGNATURE, FRAGMENT_MERGE, PHYSICS_ENTRY, STABILISED_EXTENT, STALL_BANK);
+            ACCEL_LEVEL, ACCEL_SETTLED_ENTRY, DOUBLET_SIGNATURE, FRAGMENT_MERGE, PHYSICS_ENTRY, STABILISED_EXTENT,
+            STALL_BANK);
 
     private BoundaryRules() {
     }
@@ -65,7 +71,7 @@ public final class BoundaryRules {
             case PHUGOID:
                 return List.of(BEGIN_DEPARTURE, FRAGMENT_MERGE);
             case LEVEL_ACCEL:
-                return List.of(ACCEL_EXTENT, ACCEL_GAIN, ACCEL_SETTLED_ENTRY, FRAGMENT_MERGE);
+                return List.of(ACCEL_EXTENT, ACCEL_GAIN, ACCEL_LEVEL, ACCEL_SETTLED_ENTRY, FRAGMENT_MERGE);
             case STABILISED:
                 return List.of(STABILISED_EXTENT, FRAGMENT_MERGE);
             default:

@@ -79,7 +79,8 @@ public record GuardSettings(double loopPitchRad, double loopInvertedRollRad, dou
 
     /**
      * Loop 80 deg or inverted past 135 deg of bank; stall rise 2 deg, fall 20 % or Nz drop 0.1 g; roll 315 deg;
-     * wind-up 2 g; doublet floor 1 deg/s, lobes of 25 % of the largest, 1 reversal (the input's own: a short period damped beyond about 0.7 shows no overshoot past it); stabilised Hp standard deviation
+     * wind-up 2 g; doublet floor 1 deg/s, lobes of 25 % of the largest, 1 reversal (the input's own: a short period
+     * damped beyond about 0.7 shows no overshoot past it); stabilised Hp standard deviation
      * 50 ft and CAS 1 %; sideslip 3 deg.
      */
     public static GuardSettings defaults() {

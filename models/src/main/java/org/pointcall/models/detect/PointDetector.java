@@ -9,6 +9,7 @@ import java.util.Objects;
 import org.pointcall.ingest.frame.Frame;
 import org.pointcall.shared.dictionary.ParameterDictionary;
 import org.pointcall.shared.kind.ManoeuvreKind;
+import org.pointcall.shared.units.Units;
 
 /**
  * The streaming point detector: {@link Smoother smoothing}, one {@link Hysteresis} per kind on the smoothed
@@ -63,6 +64,13 @@ public final class PointDetector implements Detector {
     private final boolean[] recovers;
     private final boolean[] accelerates;
     private final boolean[] gains;
+    /** {@code accel-level} applies to the class. */
+    private final boolean[] level;
+    /**
+     * {@code accel-level}: the largest altitude drift of a level acceleration, m/s (100 ft/min; common practice
+     * flies it within about 100 ft of the test altitude over a run of a minute or more).
+     */
+    static final double LEVEL_DRIFT_MPS = 100 * Units.M_PER_FT / 60;
     /** {@code accel-settled-entry} applies to the class. */
     private final boolean[] settlesFirst;
     /** {@code accel-settled-entry}: the stretch before the begin that must be settled, ns... */
@@ -88,7 +96,7 @@ public final class PointDetector implements Detector {
     /** Per class, entry refused until its smoothed probability has fallen below p_off (a point the physics took). */
     private final boolean[] muted;
     /** The muted class waits at least until then: its windows still hold the input the physics found. */
-    private long muteUntilNs = NONE;
+    private final long[] muteUntilNs;
     /** How long after a physics doublet's release the classifier's windows may still see its input (12 s). */
     static final long MUTE_AFTER_RELEASE_NS = 12_000_000_000L;
     /** Before the input a doublet point holds this much trimmed flight: the analysis takes its trim from it, ns. */
@@ -130,6 +138,7 @@ public final class PointDetector implements Detector {
     private long framesRejected;
     private long tickGaps;
     private long eventsEmitted;
+    private long refusals;
 
     /**
      * @param binder   fills the physical state from frames
@@ -192,6 +201,7 @@ public final class PointDetector implements Detector {
         this.accelerates = new boolean[n];
         this.gains = new boolean[n];
         this.settlesFirst = new boolean[n];
+        this.level = new boolean[n];
         this.holds = new boolean[n];
         this.gapNs = new long[n];
         long fragmentNs = Math.round(settings.boundaries().fragmentGapS() * 1e9);
@@ -206,15 +216,17 @@ public final class PointDetector implements Detector {
             accelerates[c] = BoundaryRules.applies(BoundaryRules.ACCEL_EXTENT, k, settings);
             gains[c] = BoundaryRules.applies(BoundaryRules.ACCEL_GAIN, k, settings);
             settlesFirst[c] = BoundaryRules.applies(BoundaryRules.ACCEL_SETTLED_ENTRY, k, settings);
+            level[c] = BoundaryRules.applies(BoundaryRules.ACCEL_LEVEL, k, settings);
             holds[c] = BoundaryRules.applies(BoundaryRules.STABILISED_EXTENT, k, settings);
             if (BoundaryRules.applies(BoundaryRules.FRAGMENT_MERGE, k, settings)) {
                 gapNs[c] = Math.max(mergeGapNs, fragmentNs);
             }
         }
         int d = classes.indexOf(ManoeuvreKind.PITCH_DOUBLET);
-        this.doubletClass = d >= 0 && BoundaryRules.applies(BoundaryRules.DOUBLET_SIGNATURE, ManoeuvreKind.PITCH_DOUBLET,
-                settings) ? d : -1;
+        this.doubletClass = d >= 0 && BoundaryRules.applies(BoundaryRules.DOUBLET_SIGNATURE,
+                ManoeuvreKind.PITCH_DOUBLET, settings) ? d : -1;
         this.muted = new boolean[n];
+        this.muteUntilNs = new long[n];
         this.recoveryWaitNs = Math.round(settings.boundaries().recoveryWaitS() * 1e9);
         this.accelWaitNs = Math.round(settings.boundaries().accelWaitS() * 1e9);
         resetRun(NONE);
@@ -317,7 +329,7 @@ public final class PointDetector implements Detector {
         ticksAccepted++;
         smoother.smooth(timeNs, p, smoothed);
         for (int c : kindClasses) {
-            if (muted[c] && timeNs >= muteUntilNs && smoothed[c] < settings.leaveProbability()) {
+            if (muted[c] && timeNs >= muteUntilNs[c] && smoothed[c] < settings.leaveProbability()) {
                 muted[c] = false;
             }
             channel[c].update(timeNs, smoothed[c]);
@@ -617,6 +629,14 @@ public final class PointDetector implements Detector {
                     + seconds(physical) + " s, the classifier's " + seconds(b) + " s";
             b = physical;
         }
+        if (settlesFirst[c] && refiner.settledShare(b - SETTLED_ENTRY_NS, b) < SETTLED_SHARE) {
+            // accel-settled-entry, live: a speed-up out of another manoeuvre is not begun at all, so it does not
+            // hold the next point up while it waits for its end; refused until the classifier lets go of it
+            muted[c] = true;
+            muteUntilNs[c] = now;
+            refusals++;
+            return;
+        }
         if (candidateNs[c] == NONE) {
             restart(c, b);
         }
@@ -739,7 +759,7 @@ public final class PointDetector implements Detector {
         physicsFailure = null;
         // the classifier's own view of the same doublet is not a second point
         muted[c] = true;
-        muteUntilNs = doublets.releaseNs() + MUTE_AFTER_RELEASE_NS;
+        muteUntilNs[c] = doublets.releaseNs() + MUTE_AFTER_RELEASE_NS;
         doublets.reset();
         channel[c].reset();
         assist[c].reset();
@@ -875,6 +895,20 @@ public final class PointDetector implements Detector {
                 ev.add("passed " + line);
             }
         }
+        if (level[k]) {
+            double rate = refiner.hpRate(beginNs, end);
+            String line = BoundaryRules.ACCEL_LEVEL + String.format(Locale.ROOT, ": Hp drifted %d ft/min (at most"
+                    + " %d)", Math.round(rate / Units.M_PER_FT * 60),
+                    Math.round(LEVEL_DRIFT_MPS / Units.M_PER_FT * 60));
+            if (Double.isNaN(rate)) {
+                ev.add("unchecked " + BoundaryRules.ACCEL_LEVEL + ": no Hp");
+            } else if (Math.abs(rate) > LEVEL_DRIFT_MPS) {
+                ok = false;
+                ev.add("failed " + line);
+            } else {
+                ev.add("passed " + line);
+            }
+        }
         if (gains[k]) {
             double gain = refiner.speedGain(beginNs, end);
             String line = BoundaryRules.ACCEL_GAIN + ": CAS gained " + String.format(Locale.ROOT, "%.1f", 100 * gain)
@@ -898,9 +932,12 @@ public final class PointDetector implements Detector {
         } else {
             ev.add("passed " + duration);
         }
-        if ((accelerates[k] || holds[k]) && classifierS / 1e9 < minS) {
+        boolean settledRun = settlesFirst[k]
+                && refiner.settledShare(beginNs - SETTLED_ENTRY_NS, beginNs) >= SETTLED_SHARE;
+        if ((accelerates[k] || holds[k]) && classifierS / 1e9 < minS && !settledRun) {
             // an extent rule spreads a point over the state it found; the classifier's own stretch must still have
-            // lasted the minimum, or a short fragment in a long transit would become a point
+            // lasted the minimum, or a short fragment in a long transit would become a point (a level acceleration
+            // from settled flight is a point by its physics: accel-settled-entry vouches for it)
             ok = false;
             ev.add("failed min-duration: " + String.format(Locale.ROOT, "%.2f s (needs %.2f s)", classifierS / 1e9,
                     minS) + " as the classifier saw it");
@@ -1106,5 +1143,10 @@ public final class PointDetector implements Detector {
 
     public long eventsEmitted() {
         return eventsEmitted;
+    }
+
+    /** Entries refused before they began ({@code accel-settled-entry}: a speed-up out of another manoeuvre). */
+    public long refusals() {
+        return refusals;
     }
 }

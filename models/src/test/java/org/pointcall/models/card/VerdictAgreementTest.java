@@ -22,9 +22,10 @@ class VerdictAgreementTest {
     }
 
     private static PointOutcome flown(long id, String cardId, String kind, double b, double e, Verdict v) {
-        List<Reason> why = v == Verdict.GOOD ? List.of() : List.of(new Reason("KCAS", "entry KCAS 158 kt, band 150 +/- 5 kt"));
-        return new PointOutcome(id, cardId, kind, cardId == null ? kind : cardId, Math.round(b * S), Math.round(e * S), 0.9, v, why, List.of(),
-                List.of(), Map.of(), List.of(), null);
+        List<Reason> why = v == Verdict.GOOD ? List.of()
+                : List.of(new Reason("KCAS", "entry KCAS 158 kt, band 150 +/- 5 kt"));
+        return new PointOutcome(id, cardId, kind, cardId == null ? kind : cardId, Math.round(b * S),
+                Math.round(e * S), 0.9, v, why, List.of(), List.of(), Map.of(), List.of(), null);
     }
 
     @Test
@@ -48,8 +49,8 @@ class VerdictAgreementTest {
         assertTrue(lines.contains("verdicts.agreement: 0.5000"), lines::toString);
         assertTrue(lines.contains("verdicts.agreement-of-all: 0.2500"), lines::toString);
         assertTrue(lines.contains("verdicts.unplanned: 1"), lines::toString);
-        assertTrue(lines.contains("verdicts.disagree: s1 LP-2: truth inside; tool repeat (entry KCAS 158 kt, band 150 +/- 5 kt)"),
-                lines::toString);
+        assertTrue(lines.contains("verdicts.disagree: s1 LP-2: truth inside; tool repeat "
+                + "(entry KCAS 158 kt, band 150 +/- 5 kt)"), lines::toString);
         assertEquals(List.of("s1 TP-1 stabilised 300.0 to 330.0 s: not detected",
                 "s1 SL-1 stall-level 400.0 to 440.0 s: flown as an unplanned stall-level"), a.missed());
     }

@@ -227,7 +227,8 @@ class BoundaryRulesTest {
         PointEvent kept = s.onlyFinal();
         assertEquals(ENDED, kept.type(), kept.evidence()::toString);
         assertEquals(ManoeuvreKind.PITCH_DOUBLET, kept.kind());
-        assertTrue(kept.hasEvidence("passed doublet-signature: pitch-rate input from 10.000 s"), kept.evidence()::toString);
+        assertTrue(kept.hasEvidence("passed doublet-signature: pitch-rate input from 10.000 s"),
+                kept.evidence()::toString);
         // begin: the 2 s of trimmed flight before the input; end: 8 s of free response after the release at 12 s
         assertEquals(8.0, s(kept.beginNs()), 0.05);
         assertEquals(20.0, s(kept.endNs()), 0.05);
@@ -284,20 +285,48 @@ class BoundaryRulesTest {
                 s.set(f, "AoS", 10.0);
             }
         };
-        PointEvent unsettled = run(DetectorSettings.defaults(), 120, outOfSideslip, run).onlyFinal();
-        assertEquals(DISCARDED, unsettled.type(), unsettled.evidence()::toString);
-        assertTrue(unsettled.hasEvidence("failed accel-settled-entry: 0 % of the 5 s before the begin"),
-                unsettled.evidence()::toString);
+        // refused before it begins: nothing is reported, and nothing waits for its end
+        SyntheticSortie unsettled = run(DetectorSettings.defaults(), 120, outOfSideslip, run);
+        assertTrue(unsettled.events.isEmpty(), unsettled.events::toString);
         PointEvent off = run(without(BoundaryRules.ACCEL_SETTLED_ENTRY), 120, outOfSideslip, run).onlyFinal();
         assertEquals(ENDED, off.type(), off.evidence()::toString);
+    }
+
+    @Test
+    void aSpeedUpInAClimbIsNoLevelAcceleration() {
+        Bump run = new Bump(ManoeuvreKind.LEVEL_ACCEL, 30, 60, 0.9);
+        // the same gain, once level, once climbing at 300 ft/min
+        Physics climbing = (t, f, s) -> {
+            accel(200, 1.0).fill(t, f, s);
+            s.set(f, "Hp", 10000 + 5.0 * t);
+        };
+        PointEvent level = run(DetectorSettings.defaults(), 120, accel(200, 1.0), run).onlyFinal();
+        assertEquals(ENDED, level.type(), level.evidence()::toString);
+        assertTrue(level.hasEvidence("passed accel-level: Hp drifted 0 ft/min"), level.evidence()::toString);
+        PointEvent climb = run(DetectorSettings.defaults(), 120, climbing, run).onlyFinal();
+        assertEquals(DISCARDED, climb.type(), climb.evidence()::toString);
+        assertTrue(climb.hasEvidence("failed accel-level: Hp drifted 300 ft/min (at most 100)"),
+                climb.evidence()::toString);
+        assertEquals(ENDED, run(without(BoundaryRules.ACCEL_LEVEL), 120, climbing, run).onlyFinal().type());
+    }
+
+    @Test
+    void aLevelAccelerationFromSettledFlightNeedsNoLongStretchOfTheClassifier() {
+        // the classifier sees only 5 s of a 60 s gain from settled flight (a fragment in transit would be discarded)
+        Bump glimpse = new Bump(ManoeuvreKind.LEVEL_ACCEL, 50, 55, 0.9);
+        PointEvent kept = run(DetectorSettings.defaults(), 120, accel(200, 1.0), glimpse).onlyFinal();
+        assertEquals(ENDED, kept.type(), kept.evidence()::toString);
+        assertEquals(10.0, s(kept.beginNs()), 1.0, kept.evidence()::toString);
     }
 
     @Test
     void anExtentRuleDoesNotMakeAShortFragmentLongEnough() {
         // the classifier sees 10 s of a 60 s gain: spread over the gain it would last 60 s, but 10 s is below the
         // 15 s minimum of a level acceleration
+        // (from settled flight accel-settled-entry vouches for the run instead: with it off, the classifier's stretch
+        // decides)
         Bump fragment = new Bump(ManoeuvreKind.LEVEL_ACCEL, 50, 60, 0.9);
-        PointEvent d = run(DetectorSettings.defaults(), 120, accel(200, 1.0), fragment).onlyFinal();
+        PointEvent d = run(without(BoundaryRules.ACCEL_SETTLED_ENTRY), 120, accel(200, 1.0), fragment).onlyFinal();
         assertEquals(DISCARDED, d.type(), d.evidence()::toString);
         assertTrue(d.hasEvidence("failed min-duration: 10.00 s (needs 15.00 s) as the classifier saw it"),
                 d.evidence()::toString);
