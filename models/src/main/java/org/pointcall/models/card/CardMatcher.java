@@ -73,6 +73,35 @@ public final class CardMatcher {
         return Optional.of(card.points().get(i));
     }
 
+    /**
+     * Binds a detection of {@code kind} to the first card point {@link #bind(ManoeuvreKind)} would take that
+     * {@code accept} accepts; an armed point of that kind is taken whatever {@code accept} says (the engineer chose
+     * it). Empty, binding nothing, when none is accepted.
+     */
+    public Optional<TestPoint> bind(ManoeuvreKind kind, java.util.function.Predicate<TestPoint> accept) {
+        if (armed >= 0 && card.points().get(armed).kind() == kind) {
+            return bind(kind);
+        }
+        int saved = armed;
+        for (int j = 0; j < states.length; j++) {
+            TestPoint p = card.points().get(j);
+            if (p.kind() == kind && states[j].awaitsFlight() && j != saved && accept.test(p)) {
+                before[j] = states[j];
+                states[j] = CardPointState.FLYING;
+                return Optional.of(p);
+            }
+        }
+        for (int j = 0; j < states.length; j++) {
+            TestPoint p = card.points().get(j);
+            if (p.kind() == kind && states[j] == CardPointState.REPEAT && accept.test(p)) {
+                before[j] = states[j];
+                states[j] = CardPointState.FLYING;
+                return Optional.of(p);
+            }
+        }
+        return Optional.empty();
+    }
+
     /** The card point a detection of {@code kind} would bind to now, changing nothing. */
     public Optional<TestPoint> peek(ManoeuvreKind kind) {
         int i = choose(kind);

@@ -132,6 +132,7 @@ public final class CardSession {
     public static final long CONDITION_IDS = 1_000_000_000L;
     /** On condition this long, the point is begun (from when it came on condition), ns. */
     static final long ON_CONDITION_BEGIN_NS = 5_000_000_000L;
+    private static final String ENDED_BY_FINISH = "ended by finish";
     /** The evidence line of a point flown from its condition. */
     public static final String CONDITION_EVIDENCE = "on condition:";
     private long currentFrameNs;
@@ -267,7 +268,7 @@ public final class CardSession {
         applyCommands(t);
         if (frames > 0) {
             if (conditionPoint != 0) {
-                endCondition(lastFrameNs, condition.lastOnNs(), "ended by finish");
+                endCondition(lastFrameNs, condition.lastOnNs(), ENDED_BY_FINISH);
             }
             finishing = true;
             releaseHeldEnd();
@@ -342,13 +343,59 @@ public final class CardSession {
         }
     }
 
+    /**
+     * A stabilised point is its condition: a stabilised detection binds only to a card point whose throughout bands
+     * it is near now (each bound parameter's newest sample, at most 2 s old, within {@link #NEAR_BAND_WIDTHS} band
+     * widths of the band), else it is an unplanned one. Steady flight at 300 KCAS and 12,000 ft is not the card's
+     * 250 KCAS at 10,000 ft point flown badly; 254 KCAS for 250 +/- 2 is.
+     */
+    private boolean nearCondition(TestPoint p) {
+        if (history.isEmpty()) {
+            return true;
+        }
+        for (Band b : p.bands()) {
+            if (b.phase() != BandPhase.THROUGHOUT || b.parameter() == null || !history.has(b.parameter())) {
+                continue;
+            }
+            double v = Double.NaN;
+            for (int i = history.size() - 1; i >= 0 && history.timeNs(i) >= currentFrameNs - LIVE_HOLD_NS; i--) {
+                v = history.valueSi(b.parameter(), i);
+                if (Double.isFinite(v)) {
+                    break;
+                }
+            }
+            if (!Double.isFinite(v)) {
+                continue;
+            }
+            double width = b.highSi() - b.lowSi();
+            double off = Math.max(b.lowSi() - v, v - b.highSi());
+            if (Double.isFinite(width) && off > NEAR_BAND_WIDTHS * width) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /** How far outside its band, in band widths, a stabilised detection may be and still be that card point. */
+    static final double NEAR_BAND_WIDTHS = 2.0;
+
     private void endCondition(long now, long endNs, String why) {
         long id = conditionPoint;
         conditionPoint = 0;
         long begin = active != null && active.detection == id ? active.beginNs : endNs;
         long end = Math.max(begin, endNs);
         conditionEndNs = end;
+        TestPoint p = condition.point();
         condition.reset();
+        double heldS = (end - begin) * 1e-9;
+        if (p != null && heldS < p.holdS() && !why.equals(ENDED_BY_FINISH)) {
+            // on condition for less than the hold: not a flight of the point, which stays to be flown (a pass through
+            // its numbers in transit must not take it from the real one)
+            onPointEvent(new PointEvent(PointEvent.Type.DISCARDED, id, ManoeuvreKind.STABILISED, begin, end, now,
+                    begin, 1.0, List.of(), List.of(CONDITION_EVIDENCE + " " + why, String.format(java.util.Locale.ROOT,
+                    "failed on condition: %.1f s of the %.0f s hold", heldS, p.holdS()))));
+            return;
+        }
         onPointEvent(new PointEvent(PointEvent.Type.ENDED, id, ManoeuvreKind.STABILISED, begin, end, now,
                 begin, 1.0, List.of(), List.of(CONDITION_EVIDENCE + " " + why)));
     }
@@ -399,7 +446,9 @@ public final class CardSession {
     }
 
     private void begin(PointEvent e) {
-        Optional<TestPoint> bound = matcher == null ? Optional.empty() : matcher.bind(e.kind());
+        Optional<TestPoint> bound = matcher == null ? Optional.empty()
+                : e.kind() == ManoeuvreKind.STABILISED ? matcher.bind(e.kind(), this::nearCondition)
+                : matcher.bind(e.kind());
         active = new Active(e, bound.orElse(null));
         emit(new SessionEvent.PointStarted(e.reportedAtNs(), e.pointId(), e.kind().key(), active.cardId(),
                 active.title(), e.beginNs()));

@@ -3,6 +3,7 @@ package org.pointcall.models.card;
 import java.util.Map;
 
 import org.pointcall.models.analysis.PointHistory;
+import org.pointcall.models.analysis.SlopeSums;
 import org.pointcall.shared.card.Band;
 import org.pointcall.shared.card.TestPoint;
 import org.pointcall.shared.kind.ManoeuvreKind;
@@ -223,26 +224,14 @@ public final class PhaseJudge {
 
     /** Least-squares slope, per second, of the finite samples from {@code fromNs} to {@code toNs}; NaN under 3. */
     static double slope(PointHistory h, String name, long fromNs, long toNs) {
-        int a = h.firstAtOrAfter(fromNs);
-        double st = 0;
-        double sv = 0;
-        double stt = 0;
-        double stv = 0;
-        int n = 0;
-        for (int i = a; i < h.size() && h.timeNs(i) <= toNs; i++) {
+        SlopeSums fit = new SlopeSums();
+        for (int i = h.firstAtOrAfter(fromNs); i < h.size() && h.timeNs(i) <= toNs; i++) {
             double v = h.valueSi(name, i);
-            if (!Double.isFinite(v)) {
-                continue;
+            if (Double.isFinite(v)) {
+                fit.add((h.timeNs(i) - fromNs) * 1e-9, v);
             }
-            double t = (h.timeNs(i) - fromNs) * 1e-9;
-            st += t;
-            sv += v;
-            stt += t * t;
-            stv += t * v;
-            n++;
         }
-        double den = n * stt - st * st;
-        return n < 3 || !(den > 0) ? Double.NaN : (n * stv - st * sv) / den;
+        return fit.slope();
     }
 
     /**

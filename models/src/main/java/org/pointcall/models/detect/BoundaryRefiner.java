@@ -1,5 +1,6 @@
 package org.pointcall.models.detect;
 
+import org.pointcall.models.analysis.SlopeSums;
 import org.pointcall.shared.atmosphere.StandardAtmosphere;
 import org.pointcall.shared.kind.ManoeuvreKind;
 
@@ -664,29 +665,19 @@ final class BoundaryRefiner {
         return seen == 0 ? Double.NaN : settled / (double) seen;
     }
 
+    private final SlopeSums hpFit = new SlopeSums();
+
     /** Least-squares slope of Hp from {@code beginNs} to {@code endNs}, m/s; NaN with fewer than 3 samples. */
     double hpRate(long beginNs, long endNs) {
-        int i0 = h.indexAtOrAfter(beginNs);
         int i1 = h.indexAtOrAfter(endNs + 1);
-        double st = 0;
-        double sv = 0;
-        double stt = 0;
-        double stv = 0;
-        int n = 0;
-        for (int i = i0; i < i1; i++) {
+        SlopeSums fit = hpFit.reset();
+        for (int i = h.indexAtOrAfter(beginNs); i < i1; i++) {
             double v = h.value(i, PhysicalQuantity.HP);
-            if (!Double.isFinite(v)) {
-                continue;
+            if (Double.isFinite(v)) {
+                fit.add((h.timeNs(i) - beginNs) * 1e-9, v);
             }
-            double t = (h.timeNs(i) - beginNs) * 1e-9;
-            st += t;
-            sv += v;
-            stt += t * t;
-            stv += t * v;
-            n++;
         }
-        double den = n * stt - st * st;
-        return n < 3 || !(den > 0) ? Double.NaN : (n * stv - st * sv) / den;
+        return fit.slope();
     }
 
     /** Relative CAS gain from {@code beginNs} to {@code endNs} (means over 2 s); NaN without CAS. */

@@ -640,17 +640,7 @@ public final class PointDetector implements Detector {
         if (candidateNs[c] == NONE) {
             restart(c, b);
         }
-        pointId++;
-        phase = ACTIVE;
-        waiting = false;
-        physicalEndNs = NONE;
-        pointClass = c;
-        beginNs = b;
-        begunAtNs = now;
-        confirmed = false;
-        merges = 0;
-        switchNote = null;
-        featureCount = 0;
+        open(c, b, now);
         if (top != null) {
             for (int i = 0; i < top.length && featureCount < MAX_FEATURES && top[i] != null; i++) {
                 features[featureCount++] = top[i];
@@ -671,6 +661,21 @@ public final class PointDetector implements Detector {
         emit(PointEvent.Type.BEGUN, now, NONE, List.of(), ev, liveConfidence(c));
     }
 
+    /** A new open point of class {@code c} from {@code b}, begun at {@code now}: the per-point state reset. */
+    private void open(int c, long b, long now) {
+        pointId++;
+        phase = ACTIVE;
+        waiting = false;
+        physicalEndNs = NONE;
+        pointClass = c;
+        beginNs = b;
+        begunAtNs = now;
+        confirmed = false;
+        merges = 0;
+        switchNote = null;
+        featureCount = 0;
+    }
+
     /**
      * {@code doublet-signature}: opens a doublet point found in the pitch rate ({@link DoubletWatch}), from its
      * trimmed lead before the input; the classifier waits until it is over.
@@ -684,19 +689,9 @@ public final class PointDetector implements Detector {
         classifierBeginNs = b;
         pointAssisted = false;
         restart(c, b);
-        pointId++;
-        phase = ACTIVE;
+        open(c, b, now);
         physicsPoint = true;
         physicsFailure = null;
-        waiting = false;
-        physicalEndNs = NONE;
-        pointClass = c;
-        beginNs = b;
-        begunAtNs = now;
-        confirmed = false;
-        merges = 0;
-        switchNote = null;
-        featureCount = 0;
         List<String> ev = new ArrayList<>();
         ev.add("entered: " + BoundaryRules.DOUBLET_SIGNATURE + ": " + doublets.describe() + "; begin "
                 + seconds(DOUBLET_LEAD_NS) + " s before the input");

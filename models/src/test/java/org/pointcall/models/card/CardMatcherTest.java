@@ -41,6 +41,26 @@ class CardMatcherTest {
     }
 
     @Test
+    void aDetectionBindsToTheFirstPendingPointItsConditionAccepts() {
+        CardMatcher m = new CardMatcher(CARD);
+        // the first loop is not accepted (its condition is not met): the second is taken, the first stays to fly
+        assertEquals("LP-2", m.bind(ManoeuvreKind.LOOP, p -> !p.id().equals("LP-1")).map(TestPoint::id).orElse("-"));
+        assertEquals(CardPointState.FLYING, m.state("LP-2"));
+        assertEquals(CardPointState.PENDING, m.state("LP-1"));
+        m.settle("LP-2", Verdict.REPEAT);
+        // none accepted: nothing bound, nothing changed
+        assertTrue(m.bind(ManoeuvreKind.LOOP, p -> false).isEmpty());
+        assertEquals(CardPointState.PENDING, m.state("LP-1"));
+        assertEquals(CardPointState.REPEAT, m.state("LP-2"));
+        // a point to repeat is taken when it is the one accepted
+        assertEquals("LP-2", m.bind(ManoeuvreKind.LOOP, p -> p.id().equals("LP-2")).map(TestPoint::id).orElse("-"));
+        // the armed point is the engineer's choice, whatever the condition says
+        m.settle("LP-2", Verdict.GOOD);
+        m.arm("LP-1");
+        assertEquals("LP-1", m.bind(ManoeuvreKind.LOOP, p -> false).map(TestPoint::id).orElse("-"));
+    }
+
+    @Test
     void anArmedPointTakesPrecedenceForItsKindOnly() {
         CardMatcher m = new CardMatcher(CARD);
         m.arm("SL-2");
