@@ -42,13 +42,18 @@ public final class BoundaryRules {
      * lobes whose areas nearly cancel, a settling free response with the speed held ({@link DoubletWatch}).
      */
     public static final String DOUBLET_SIGNATURE = "doublet-signature";
+    /**
+     * An aileron roll is found in the roll rate and bank alone, without the classifier: a full turn of bank while the
+     * roll rate is up, from quiet ({@link RollWatch}).
+     */
+    public static final String ROLL_SIGNATURE = "roll-signature";
     /** Long points (level acceleration, phugoid, stabilised) bridge longer gaps of their own kind. */
     public static final String FRAGMENT_MERGE = "fragment-merge";
 
     /** Every boundary rule name, in documentation order. */
     public static final List<String> NAMES = List.of(BEGIN_DEPARTURE, END_RECOVERY, ACCEL_EXTENT, ACCEL_GAIN,
-            ACCEL_LEVEL, ACCEL_SETTLED_ENTRY, DOUBLET_SIGNATURE, FRAGMENT_MERGE, PHYSICS_ENTRY, STABILISED_EXTENT,
-            STALL_BANK);
+            ACCEL_LEVEL, ACCEL_SETTLED_ENTRY, DOUBLET_SIGNATURE, FRAGMENT_MERGE, PHYSICS_ENTRY, ROLL_SIGNATURE,
+            STABILISED_EXTENT, STALL_BANK);
 
     private BoundaryRules() {
     }
@@ -60,8 +65,9 @@ public final class BoundaryRules {
             case STALL_TURN:
                 // an AoA peak with a fall is common outside stalls: too weak to vouch for an entry
                 return List.of(BEGIN_DEPARTURE, END_RECOVERY, STALL_BANK);
-            case WIND_UP_TURN:
             case AILERON_ROLL:
+                return List.of(BEGIN_DEPARTURE, END_RECOVERY, PHYSICS_ENTRY, ROLL_SIGNATURE);
+            case WIND_UP_TURN:
             case SIDESLIP:
                 return List.of(BEGIN_DEPARTURE, END_RECOVERY, PHYSICS_ENTRY);
             case LOOP:

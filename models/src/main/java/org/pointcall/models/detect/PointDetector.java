@@ -93,6 +93,11 @@ public final class PointDetector implements Detector {
     private boolean physicsPoint;
     /** Why the watch gave up on the open physics point; it is then discarded. */
     private String physicsFailure;
+    /** {@code roll-signature}: rolls found in the roll rate and bank alone; -1 when off or not a class. */
+    private final RollWatch rolls = new RollWatch();
+    private final int rollClass;
+    /** The open point was opened by the roll watch. */
+    private boolean physicsRoll;
     /** Per class, entry refused until its smoothed probability has fallen below p_off (a point the physics took). */
     private final boolean[] muted;
     /** The muted class waits at least until then: its windows still hold the input the physics found. */
@@ -225,6 +230,9 @@ public final class PointDetector implements Detector {
         int d = classes.indexOf(ManoeuvreKind.PITCH_DOUBLET);
         this.doubletClass = d >= 0 && BoundaryRules.applies(BoundaryRules.DOUBLET_SIGNATURE,
                 ManoeuvreKind.PITCH_DOUBLET, settings) ? d : -1;
+        int r = classes.indexOf(ManoeuvreKind.AILERON_ROLL);
+        this.rollClass = r >= 0 && BoundaryRules.applies(BoundaryRules.ROLL_SIGNATURE, ManoeuvreKind.AILERON_ROLL,
+                settings) ? r : -1;
         this.muted = new boolean[n];
         this.muteUntilNs = new long[n];
         this.recoveryWaitNs = Math.round(settings.boundaries().recoveryWaitS() * 1e9);
@@ -254,6 +262,8 @@ public final class PointDetector implements Detector {
         pointId = 0;
         physics.clear();
         doublets.clear();
+        rolls.clear();
+        physicsRoll = false;
         physicsPoint = false;
         physicsFailure = null;
         java.util.Arrays.fill(muted, false);
@@ -284,6 +294,9 @@ public final class PointDetector implements Detector {
         physics.add(state);
         if (doubletClass >= 0) {
             doublets.onState(state);
+        }
+        if (rollClass >= 0) {
+            rolls.onState(state);
         }
         historyNs[historyNext] = t;
         state.copyTo(historyValues, historySampledNs, historyNext * PhysicalQuantity.COUNT);
@@ -404,6 +417,19 @@ public final class PointDetector implements Detector {
     }
 
     private void decide(long now, String[] top) {
+        if (physicsRoll) {
+            followPhysicsRoll(now, top);
+            return;
+        }
+        if (rollClass >= 0 && rolls.found()) {
+            if (phase == IDLE && (lastEndNs == NONE || rolls.startNs() > lastEndNs)) {
+                beginPhysicsRoll(now);
+                followPhysicsRoll(now, top);
+                return;
+            }
+            // seen inside another point: the classifier's own roll, or a manoeuvre with a roll in it
+            rolls.reset();
+        }
         if (physicsPoint) {
             followPhysicsPoint(now);
             return;
@@ -718,6 +744,68 @@ public final class PointDetector implements Detector {
                 + doublets.describe() + moved), liveConfidence(pointClass));
     }
 
+    /**
+     * {@code roll-signature}: opens an aileron roll found in the roll rate and bank ({@link RollWatch}), begun where
+     * the aircraft left its steady entry ({@code begin-departure}, else the roll's onset); it ends where
+     * {@code end-recovery} finds it back in steady flight.
+     */
+    private void beginPhysicsRoll(long now) {
+        int c = rollClass;
+        long b = rolls.startNs();
+        if (departs[c]) {
+            long d = refiner.departureBegin(b, lastEndNs, now);
+            if (d != NONE && d <= b) {
+                b = d;
+            }
+        }
+        if (lastEndNs != NONE) {
+            b = Math.max(b, lastEndNs);
+        }
+        classifierBeginNs = b;
+        pointAssisted = false;
+        restart(c, b);
+        // the rules judge the roll itself, which is already behind us
+        for (GuardRule rule : rules[c]) {
+            lookBack(rule, b);
+        }
+        open(c, b, now);
+        physicsRoll = true;
+        endEstimateNs = rolls.endNs();
+        emit(PointEvent.Type.BEGUN, now, NONE, List.of(), List.of("entered: " + BoundaryRules.ROLL_SIGNATURE + ": "
+                + String.format(Locale.ROOT, "%.0f deg of bank turned from %.3f s to %.3f s", Math.toDegrees(
+                rolls.turnedRad()), rolls.startNs() / 1e9, rolls.endNs() / 1e9)), PHYSICS_CONFIDENCE);
+    }
+
+    /** The open physics roll: ended once back in steady flight, or when another kind enters, or after the wait. */
+    private void followPhysicsRoll(long now, String[] top) {
+        int c = pointClass;
+        long e = recovers[c] ? refiner.recoveryEnd(ManoeuvreKind.AILERON_ROLL, beginNs,
+                rolls.endNs() + ROLL_CORE_AFTER_NS, now) : rolls.endNs();
+        int j = strongestOn(c);
+        if (e == NONE && j < 0 && now - rolls.endNs() <= recoveryWaitNs) {
+            return;
+        }
+        physicalEndNs = e == NONE ? NONE : e;
+        for (GuardRule r : rules[c]) {
+            r.mark();
+        }
+        long end = e != NONE ? e : rolls.endNs();
+        close(now, end, e != NONE ? null : "ended by " + BoundaryRules.ROLL_SIGNATURE + ": no steady flight after"
+                + " the roll", j >= 0 ? riseEstimate(j) : NONE);
+        physicsRoll = false;
+        rolls.reset();
+        muted[c] = true;
+        muteUntilNs[c] = now + MUTE_AFTER_RELEASE_NS;
+        channel[c].reset();
+        assist[c].reset();
+        if (j >= 0 && j != c) {
+            begin(j, now, top);
+        }
+    }
+
+    /** A roll's core (its highest rates) is looked for up to this long after the rate fell back. */
+    private static final long ROLL_CORE_AFTER_NS = 500_000_000L;
+
     /** The open physics point: confirmed, ended or given up as the watch says. */
     private void followPhysicsPoint(long now) {
         int s = doublets.status();
@@ -875,6 +963,9 @@ public final class PointDetector implements Detector {
             ev.add("failed " + BoundaryRules.DOUBLET_SIGNATURE + ": " + physicsFailure);
         } else if (physicsPoint) {
             ev.add("passed " + BoundaryRules.DOUBLET_SIGNATURE + ": " + doublets.describe());
+        } else if (physicsRoll) {
+            ev.add("passed " + BoundaryRules.ROLL_SIGNATURE + String.format(Locale.ROOT, ": %.0f deg of bank turned"
+                    + " from %.3f s", Math.toDegrees(rolls.turnedRad()), rolls.startNs() / 1e9));
         }
         if (settlesFirst[k]) {
             double share = refiner.settledShare(beginNs - SETTLED_ENTRY_NS, beginNs);
@@ -1055,7 +1146,13 @@ public final class PointDetector implements Detector {
     @Override
     public void finish(long timeNs) {
         long now = lastTickNs == NONE ? timeNs : Math.max(timeNs, lastTickNs);
-        if (physicsPoint) {
+        if (physicsRoll) {
+            for (GuardRule r : rules[pointClass]) {
+                r.mark();
+            }
+            close(now, rolls.endNs(), "ended by finish", NONE);
+            physicsRoll = false;
+        } else if (physicsPoint) {
             int s = doublets.status();
             if (s != DoubletWatch.CONFIRMED && s != DoubletWatch.ENDED) {
                 physicsFailure = "the stream ended before the response settled";

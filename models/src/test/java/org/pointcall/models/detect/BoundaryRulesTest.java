@@ -293,6 +293,36 @@ class BoundaryRulesTest {
     }
 
     @Test
+    void theRollSignatureFindsARollTheClassifierNeverSees() {
+        // no probability rises at all: the pull from 10 s, the full roll at 150 deg/s from 12 s, wings level from 14.4 s
+        SyntheticSortie s = run(DetectorSettings.defaults(), 30, roll());
+        PointEvent kept = s.onlyFinal();
+        assertEquals(ENDED, kept.type(), kept.evidence()::toString);
+        assertEquals(ManoeuvreKind.AILERON_ROLL, kept.kind());
+        assertTrue(kept.hasEvidence("passed roll-signature: 360 deg of bank turned from 12.0"),
+                kept.evidence()::toString);
+        assertTrue(kept.hasEvidence("passed roll-360"), kept.evidence()::toString);
+        // begun where the pull began, ended once back in steady flight (2 s of it after the roll)
+        assertEquals(10.0, s(kept.beginNs()), 0.3, kept.evidence()::toString);
+        assertEquals(16.4, s(kept.endNs()), 0.5, kept.evidence()::toString);
+        assertTrue(run(without(BoundaryRules.ROLL_SIGNATURE), 30, roll()).events.isEmpty());
+    }
+
+    @Test
+    void halfARollAndBackIsNoRoll() {
+        // 180 deg of bank one way at 150 deg/s, a second level, and back: the rate is up, but no full turn
+        Physics half = (t, f, s) -> {
+            SyntheticSortie.level(t, f, s);
+            double p = t >= 12 && t < 13.2 ? 150 : t >= 14.2 && t < 15.4 ? -150 : 0;
+            double bank = t < 12 ? 0 : t < 13.2 ? 150 * (t - 12) : t < 14.2 ? 180 : t < 15.4 ? 180 - 150 * (t - 14.2)
+                    : 0;
+            s.set(f, "P", p);
+            s.set(f, "Roll", bank > 180 ? bank - 360 : bank);
+        };
+        assertTrue(run(DetectorSettings.defaults(), 30, half).events.isEmpty());
+    }
+
+    @Test
     void aSpeedUpInAClimbIsNoLevelAcceleration() {
         Bump run = new Bump(ManoeuvreKind.LEVEL_ACCEL, 30, 60, 0.9);
         // the same gain, once level, once climbing at 300 ft/min
