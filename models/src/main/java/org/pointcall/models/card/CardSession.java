@@ -454,21 +454,26 @@ public final class CardSession {
                 active.title(), e.beginNs()));
     }
 
+    /** The open point's detection is now of another kind: unbound from its card point, bound as that kind. */
+    private Active rebound(Active a, PointEvent e) {
+        if (a.point != null) {
+            matcher.unbind(a.point.id());
+        }
+        Optional<TestPoint> bound = matcher == null ? Optional.empty() : matcher.bind(e.kind());
+        Active next = new Active(e, bound.orElse(null));
+        next.hints.putAll(a.hints);
+        emit(new SessionEvent.PointStarted(e.reportedAtNs(), e.pointId(), e.kind().key(), next.cardId(),
+                next.title(), e.beginNs()));
+        return next;
+    }
+
     private void refine(PointEvent e) {
         if (active == null || active.detection != e.pointId()) {
             return;
         }
         active.take(e);
         if (e.kind() != active.kind) {
-            if (active.point != null) {
-                matcher.unbind(active.point.id());
-            }
-            Optional<TestPoint> bound = matcher == null ? Optional.empty() : matcher.bind(e.kind());
-            Active next = new Active(e, bound.orElse(null));
-            next.hints.putAll(active.hints);
-            active = next;
-            emit(new SessionEvent.PointStarted(e.reportedAtNs(), e.pointId(), e.kind().key(), active.cardId(),
-                    active.title(), e.beginNs()));
+            active = rebound(active, e);
         }
     }
 
@@ -477,6 +482,9 @@ public final class CardSession {
         active = null;
         if (a == null || a.detection != e.pointId()) {
             a = new Active(e, matcher == null ? null : matcher.bind(e.kind()).orElse(null));
+        } else if (a.kind != e.kind()) {
+            // told at its end (a stall by its bank): bound again as the kind it ended as
+            a = rebound(a, e);
         }
         a.take(e);
         boolean discarded = e.type() == PointEvent.Type.DISCARDED;

@@ -63,6 +63,23 @@ public abstract class GuardRule {
         mark();
     }
 
+    /**
+     * Goes on from {@code other}'s state, a rule of the same check for another kind (a stall that turns out to be
+     * a turning one keeps what its AoA-peak rule saw since the entry).
+     *
+     * @throws IllegalArgumentException when {@code other} is another check
+     */
+    public final void continueFrom(GuardRule other) {
+        if (other.getClass() != getClass() || other.v.length != v.length || other.t.length != t.length) {
+            throw new IllegalArgumentException(other.name + " cannot continue as " + name);
+        }
+        System.arraycopy(other.v, 0, v, 0, v.length);
+        System.arraycopy(other.t, 0, t, 0, t.length);
+        System.arraycopy(other.keptV, 0, keptV, 0, v.length);
+        System.arraycopy(other.keptT, 0, keptT, 0, t.length);
+        startNs = other.startNs;
+    }
+
     /** Takes the state of one frame; reads only quantities {@link PhysicalState#fresh fresh} in it. */
     public abstract void onState(PhysicalState state);
 

@@ -886,10 +886,20 @@ public final class PointDetector implements Detector {
 
     /** The open point goes on as class {@code j}, to be confirmed again, and says so with the switch note. */
     private void continueAs(int j, long now) {
+        int was = pointClass;
         pointClass = j;
         confirmed = false;
         if (candidateNs[j] == NONE) {
             restart(j, now);
+        }
+        // a rule both kinds share goes on with what it saw of the point so far, when it saw more
+        for (GuardRule r : rules[j]) {
+            for (GuardRule o : was >= 0 ? rules[was] : new GuardRule[0]) {
+                if (o.name().equals(r.name()) && o.startNs() != NONE
+                        && (r.startNs() == NONE || o.startNs() < r.startNs())) {
+                    r.continueFrom(o);
+                }
+            }
         }
         List<String> ev = new ArrayList<>();
         addFeatures(ev);
