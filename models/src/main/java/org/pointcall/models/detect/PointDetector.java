@@ -979,45 +979,21 @@ public final class PointDetector implements Detector {
         }
         if (settlesFirst[k]) {
             double share = refiner.settledShare(beginNs - SETTLED_ENTRY_NS, beginNs);
-            String line = BoundaryRules.ACCEL_SETTLED_ENTRY + String.format(Locale.ROOT, ": %.0f %% of the %.0f s"
-                    + " before the begin in settled wings-level flight (needs %.0f %%)", 100 * share,
-                    SETTLED_ENTRY_NS / 1e9, 100 * SETTLED_SHARE);
-            if (Double.isNaN(share)) {
-                ev.add("unchecked " + BoundaryRules.ACCEL_SETTLED_ENTRY + ": no bank, AoS or P");
-            } else if (share < SETTLED_SHARE) {
-                ok = false;
-                ev.add("failed " + line);
-            } else {
-                ev.add("passed " + line);
-            }
+            ok &= judged(ev, BoundaryRules.ACCEL_SETTLED_ENTRY, share, share >= SETTLED_SHARE, String.format(
+                    Locale.ROOT, "%.0f %% of the %.0f s before the begin in settled wings-level flight (needs %.0f %%)",
+                    100 * share, SETTLED_ENTRY_NS / 1e9, 100 * SETTLED_SHARE), "no bank, AoS or P");
         }
         if (level[k]) {
             double rate = refiner.hpRate(beginNs, end);
-            String line = BoundaryRules.ACCEL_LEVEL + String.format(Locale.ROOT, ": Hp drifted %d ft/min (at most"
-                    + " %d)", Math.round(rate / Units.M_PER_FT * 60),
-                    Math.round(LEVEL_DRIFT_MPS / Units.M_PER_FT * 60));
-            if (Double.isNaN(rate)) {
-                ev.add("unchecked " + BoundaryRules.ACCEL_LEVEL + ": no Hp");
-            } else if (Math.abs(rate) > LEVEL_DRIFT_MPS) {
-                ok = false;
-                ev.add("failed " + line);
-            } else {
-                ev.add("passed " + line);
-            }
+            ok &= judged(ev, BoundaryRules.ACCEL_LEVEL, rate, Math.abs(rate) <= LEVEL_DRIFT_MPS, String.format(
+                    Locale.ROOT, "Hp drifted %d ft/min (at most %d)", Math.round(rate / Units.M_PER_FT * 60),
+                    Math.round(LEVEL_DRIFT_MPS / Units.M_PER_FT * 60)), "no Hp");
         }
         if (gains[k]) {
             double gain = refiner.speedGain(beginNs, end);
-            String line = BoundaryRules.ACCEL_GAIN + ": CAS gained " + String.format(Locale.ROOT, "%.1f", 100 * gain)
-                    + " % (needs " + String.format(Locale.ROOT, "%.1f", 100 * settings.boundaries().accelGain())
-                    + " %)";
-            if (Double.isNaN(gain)) {
-                ev.add("unchecked " + BoundaryRules.ACCEL_GAIN + ": no CAS");
-            } else if (gain < settings.boundaries().accelGain()) {
-                ok = false;
-                ev.add("failed " + line);
-            } else {
-                ev.add("passed " + line);
-            }
+            double needs = settings.boundaries().accelGain();
+            ok &= judged(ev, BoundaryRules.ACCEL_GAIN, gain, gain >= needs, String.format(Locale.ROOT,
+                    "CAS gained %.1f %% (needs %.1f %%)", 100 * gain, 100 * needs), "no CAS");
         }
         double durationS = (end - beginNs) / 1e9;
         double minS = settings.minDurationS(kind);
@@ -1078,6 +1054,20 @@ public final class PointDetector implements Detector {
         pointClass = -1;
         candidateNs[k] = edge[k].riseNs();
         restart(k, candidateNs[k]);
+    }
+
+    /**
+     * One point-wide rule's evidence line: {@code unchecked} when {@code value} is NaN (the quantity is absent),
+     * else {@code passed} or {@code failed}; false only when it failed.
+     */
+    private static boolean judged(List<String> ev, String rule, double value, boolean passes, String figures,
+                                  String missing) {
+        if (Double.isNaN(value)) {
+            ev.add("unchecked " + rule + ": " + missing);
+            return true;
+        }
+        ev.add((passes ? "passed " : "failed ") + rule + ": " + figures);
+        return passes;
     }
 
     private long refinedEndNs;
