@@ -50,6 +50,8 @@ public final class SessionDesk implements DeskModel, SessionListener {
     private SessionSide session;
     private final List<LogEntry> events = new ArrayList<>();
     private final List<PointSpan> spans = new ArrayList<>();
+    /** Index in {@link #spans} of the span each detection opened. */
+    private final java.util.Map<Long, Integer> openSpans = new java.util.HashMap<>();
     private final List<AlarmLine> alarms = new ArrayList<>();
     private final Map<String, Long> openAlarmByLimit = new HashMap<>();
     private final Map<String, String> notes = new HashMap<>();
@@ -121,7 +123,15 @@ public final class SessionDesk implements DeskModel, SessionListener {
         double t = e.timeNs() / 1e9;
         LogEntry.Kind kind = LogEntry.Kind.POINT;
         if (e instanceof SessionEvent.PointStarted p) {
-            spans.add(new PointSpan(label(p.cardId(), p.kind()), p.beginNs() / 1e9, Double.NaN));
+            PointSpan span = new PointSpan(label(p.cardId(), p.kind()), p.beginNs() / 1e9, Double.NaN);
+            Integer open = openSpans.get(p.detection());
+            if (open != null && spans.get(open).open()) {
+                // the same detection bound again (its kind told later): the span it opened is relabelled, not doubled
+                spans.set(open, span);
+            } else {
+                openSpans.put(p.detection(), spans.size());
+                spans.add(span);
+            }
         } else if (e instanceof SessionEvent.PointFinished f) {
             close(f.outcome());
             verdict = new VerdictCard(label(f.outcome().cardId(), f.outcome().kind()), outcome(f.outcome().verdict()),
