@@ -422,7 +422,13 @@ public final class PointDetector implements Detector {
             return;
         }
         if (rollClass >= 0 && rolls.found()) {
-            if (phase == IDLE && (lastEndNs == NONE || rolls.startNs() > lastEndNs)) {
+            if (phase != IDLE && !physicsPoint && pointClass != rollClass && rolls.startNs() > beginNs) {
+                // a full roll is a manoeuvre of its own: the point still open (a speed-up waiting for its end) ends
+                // where the roll began, and the roll is the next point
+                long end = phase == CLOSING ? Math.min(endEstimateNs, rolls.startNs()) : rolls.startNs();
+                close(now, end, "ended when " + BoundaryRules.ROLL_SIGNATURE + " found a roll", rolls.startNs());
+            }
+            if (phase == IDLE && (lastEndNs == NONE || rolls.startNs() >= lastEndNs)) {
                 beginPhysicsRoll(now);
                 followPhysicsRoll(now, top);
                 return;

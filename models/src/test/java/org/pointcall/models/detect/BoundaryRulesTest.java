@@ -6,6 +6,7 @@ import static org.pointcall.models.detect.PointEvent.Type.DISCARDED;
 import static org.pointcall.models.detect.PointEvent.Type.ENDED;
 import static org.pointcall.models.detect.SyntheticSortie.assertWellFormed;
 
+import java.util.List;
 import java.util.Set;
 import java.util.SplittableRandom;
 
@@ -306,6 +307,28 @@ class BoundaryRulesTest {
         assertEquals(10.0, s(kept.beginNs()), 0.3, kept.evidence()::toString);
         assertEquals(16.4, s(kept.endNs()), 0.5, kept.evidence()::toString);
         assertTrue(run(without(BoundaryRules.ROLL_SIGNATURE), 30, roll()).events.isEmpty());
+    }
+
+    @Test
+    void aRollEndsTheSpeedUpStillWaitingForItsEndAndIsAPointOfItsOwn() {
+        // a gain of speed from 10 to 70 s that then holds its highest speed (so the level acceleration waits for the
+        // drop that ends it), then a full roll at 150 deg/s from 80 s
+        Bump run = new Bump(ManoeuvreKind.LEVEL_ACCEL, 30, 60, 0.9);
+        Physics gainThenRoll = (t, f, s) -> {
+            SyntheticSortie.level(t, f, s);
+            s.set(f, "KCAS", 200 + Math.max(0, Math.min(t, 70) - 10));
+            if (t >= 80 && t < 82.4) {
+                s.set(f, "P", 150.0);
+                s.set(f, "Roll", Math.IEEEremainder(150.0 * (t - 80), 360.0));
+            }
+        };
+        SyntheticSortie sortie = run(DetectorSettings.defaults(), 120, gainThenRoll, run);
+        List<PointEvent> ended = sortie.ofType(ENDED);
+        assertEquals(2, ended.size(), sortie.events::toString);
+        assertEquals(ManoeuvreKind.LEVEL_ACCEL, ended.get(0).kind());
+        assertTrue(s(ended.get(0).endNs()) <= 80.05, ended.get(0).evidence()::toString);
+        assertEquals(ManoeuvreKind.AILERON_ROLL, ended.get(1).kind(), ended.get(1).evidence()::toString);
+        assertEquals(80.0, s(ended.get(1).beginNs()), 0.3, ended.get(1).evidence()::toString);
     }
 
     @Test
