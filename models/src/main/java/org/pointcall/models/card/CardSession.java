@@ -319,7 +319,7 @@ public final class CardSession {
         }
         if (conditionPoint != 0) {
             condition.update(condition.point(), history, t);
-            if (condition.broken(t)) {
+            if (condition.broken()) {
                 endCondition(t, condition.lastOnNs(), "left condition: " + condition.offBand() + " outside");
             }
             return;

@@ -128,7 +128,7 @@ final class ConditionWatch {
     }
 
     /** True once the condition has been broken (outside for longer than the transient) after it was met. */
-    boolean broken(long nowNs) {
+    boolean broken() {
         return onSinceNs == NONE && lastOnNs != NONE;
     }
 
