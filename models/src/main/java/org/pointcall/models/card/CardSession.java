@@ -354,16 +354,10 @@ public final class CardSession {
             return true;
         }
         for (Band b : p.bands()) {
-            if (b.phase() != BandPhase.THROUGHOUT || b.parameter() == null || !history.has(b.parameter())) {
+            if (!PhaseJudge.onCondition(b, history)) {
                 continue;
             }
-            double v = Double.NaN;
-            for (int i = history.size() - 1; i >= 0 && history.timeNs(i) >= currentFrameNs - LIVE_HOLD_NS; i--) {
-                v = history.valueSi(b.parameter(), i);
-                if (Double.isFinite(v)) {
-                    break;
-                }
-            }
+            double v = newestSi(b.parameter(), currentFrameNs);
             if (!Double.isFinite(v)) {
                 continue;
             }
@@ -818,6 +812,17 @@ public final class CardSession {
         }
     }
 
+    /** The newest finite sample of {@code parameter} at most {@link #LIVE_HOLD_NS} before {@code nowNs}, SI; or NaN. */
+    private double newestSi(String parameter, long nowNs) {
+        for (int i = history.size() - 1; i >= 0 && history.timeNs(i) >= nowNs - LIVE_HOLD_NS; i--) {
+            double v = history.valueSi(parameter, i);
+            if (Double.isFinite(v)) {
+                return v;
+            }
+        }
+        return Double.NaN;
+    }
+
     /** A live gauge shows a parameter's newest sample up to this old (a parameter sampled at 0.5 Hz or more). */
     static final long LIVE_HOLD_NS = 2_000_000_000L;
 
@@ -863,13 +868,7 @@ public final class CardSession {
             } else {
                 // the newest sample of the parameter: a slow one (a discrete at 4 Hz) is NaN in most frames, and
                 // the decision ticks may never fall on a frame that carries it
-                double v = Double.NaN;
-                for (int i = history.size() - 1; i >= 0 && history.timeNs(i) >= nowNs - LIVE_HOLD_NS; i--) {
-                    v = history.valueSi(p, i);
-                    if (Double.isFinite(v)) {
-                        break;
-                    }
-                }
+                double v = newestSi(p, nowNs);
                 if (Double.isFinite(v)) {
                     valueSi = v;
                 }

@@ -5,7 +5,6 @@ import java.util.List;
 
 import org.pointcall.models.analysis.PointHistory;
 import org.pointcall.shared.card.Band;
-import org.pointcall.shared.card.BandPhase;
 import org.pointcall.shared.card.TestPoint;
 
 /**
@@ -20,7 +19,7 @@ import org.pointcall.shared.card.TestPoint;
 final class ConditionWatch {
     static final long NONE = Long.MIN_VALUE;
     /** The newest sample of a parameter counts this long. */
-    static final long SAMPLE_AGE_NS = 2_000_000_000L;
+    static final long SAMPLE_AGE_NS = CardSession.LIVE_HOLD_NS;
     /** Outside for longer than this breaks the condition (the verdict's own transient allowance). */
     static final long OFF_AFTER_NS = Math.round(PhaseJudge.TRANSIENT_S * 1e9);
 
@@ -49,7 +48,7 @@ final class ConditionWatch {
             return false;
         }
         for (Band b : p.bands()) {
-            if (b.phase() == BandPhase.THROUGHOUT && b.parameter() != null && h.has(b.parameter())) {
+            if (PhaseJudge.onCondition(b, h)) {
                 return true;
             }
         }
@@ -62,7 +61,7 @@ final class ConditionWatch {
             reset();
             point = p;
             for (Band b : p.bands()) {
-                if (b.phase() == BandPhase.THROUGHOUT && b.parameter() != null && h.has(b.parameter())) {
+                if (PhaseJudge.onCondition(b, h)) {
                     bands.add(b);
                 }
             }

@@ -234,6 +234,12 @@ public final class PhaseJudge {
         return fit.slope();
     }
 
+    /** A throughout band on a parameter {@code h} records: one that says what the point's condition is. */
+    static boolean onCondition(Band b, PointHistory h) {
+        return b.phase() == org.pointcall.shared.card.BandPhase.THROUGHOUT && b.parameter() != null
+                && h.has(b.parameter());
+    }
+
     /**
      * For a point with a hold time: the earliest time, no earlier than {@code floorNs} nor the hold time before
      * {@code beginNs}, from which every throughout band with a recorded parameter stayed inside up to
@@ -246,8 +252,7 @@ public final class PhaseJudge {
         long since = from;
         boolean any = false;
         for (Band b : point.bands()) {
-            if (b.phase() != org.pointcall.shared.card.BandPhase.THROUGHOUT || b.parameter() == null
-                    || !h.has(b.parameter())) {
+            if (!onCondition(b, h)) {
                 continue;
             }
             any = true;

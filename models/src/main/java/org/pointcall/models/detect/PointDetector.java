@@ -791,7 +791,7 @@ public final class PointDetector implements Detector {
         if (e == NONE && j < 0 && now - rolls.endNs() <= recoveryWaitNs) {
             return;
         }
-        physicalEndNs = e == NONE ? NONE : e;
+        physicalEndNs = e;
         for (GuardRule r : rules[c]) {
             r.mark();
         }
