@@ -102,10 +102,10 @@ public final class CardMatcher {
         return Optional.empty();
     }
 
-    /** The card point a detection of {@code kind} would bind to now, changing nothing. */
-    public Optional<TestPoint> peek(ManoeuvreKind kind) {
+    /** The card point a detection of {@code kind} would bind to now, changing nothing; null when none. */
+    public TestPoint peek(ManoeuvreKind kind) {
         int i = choose(kind);
-        return i < 0 ? Optional.empty() : Optional.of(card.points().get(i));
+        return i < 0 ? null : card.points().get(i);
     }
 
     /** The armed point of that kind, else the first awaiting flight, else the first to repeat; -1 for none. */

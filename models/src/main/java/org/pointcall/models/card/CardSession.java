@@ -328,7 +328,7 @@ public final class CardSession {
             condition.reset();
             return;
         }
-        TestPoint p = matcher.peek(ManoeuvreKind.STABILISED).orElse(null);
+        TestPoint p = matcher.peek(ManoeuvreKind.STABILISED);
         if (p == null || !ConditionWatch.watchable(p, history)) {
             condition.reset();
             return;

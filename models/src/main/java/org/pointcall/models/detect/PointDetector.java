@@ -776,6 +776,7 @@ public final class PointDetector implements Detector {
         }
         open(c, b, now);
         physicsRoll = true;
+        lastEndCheckNs = NONE;
         endEstimateNs = rolls.endNs();
         emit(PointEvent.Type.BEGUN, now, NONE, List.of(), List.of("entered: " + BoundaryRules.ROLL_SIGNATURE + ": "
                 + String.format(Locale.ROOT, "%.0f deg of bank turned from %.3f s to %.3f s", Math.toDegrees(
@@ -785,10 +786,15 @@ public final class PointDetector implements Detector {
     /** The open physics roll: ended once back in steady flight, or when another kind enters, or after the wait. */
     private void followPhysicsRoll(long now, String[] top) {
         int c = pointClass;
+        int j = strongestOn(c);
+        boolean waited = now - rolls.endNs() > recoveryWaitNs;
+        if (j < 0 && !waited && lastEndCheckNs != NONE && now - lastEndCheckNs < END_CHECK_NS) {
+            return; // the recovery is looked for at most every END_CHECK_NS, as for any point waiting for its end
+        }
+        lastEndCheckNs = now;
         long e = recovers[c] ? refiner.recoveryEnd(ManoeuvreKind.AILERON_ROLL, beginNs,
                 rolls.endNs() + ROLL_CORE_AFTER_NS, now) : rolls.endNs();
-        int j = strongestOn(c);
-        if (e == NONE && j < 0 && now - rolls.endNs() <= recoveryWaitNs) {
+        if (e == NONE && j < 0 && !waited) {
             return;
         }
         physicalEndNs = e;
