@@ -35,4 +35,10 @@ public final class SlopeSums {
         double den = n * stt - st * st;
         return n < 3 || !(den > 0) ? Double.NaN : (n * stv - st * sv) / den;
     }
+
+    /** The fitted line's value at {@code t} (same origin as the samples'); NaN where {@link #slope()} is. */
+    public double at(double t) {
+        double b = slope();
+        return Double.isNaN(b) ? Double.NaN : (sv - b * st) / n + b * t;
+    }
 }

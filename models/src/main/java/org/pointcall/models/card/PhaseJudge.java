@@ -19,7 +19,9 @@ import org.pointcall.shared.outcome.Reason;
  * comes inside ({@link #LEAD_IN_S}): held when the time outside is at most {@link #TRANSIENT_S} or, for a point
  * with a hold time, when one stretch inside (excursions up to {@link #HOLD_BRIDGE_S} bridged) lasts the hold;
  * {@code rate} the least-squares slope over the
- * band's interval before its key instant; {@code instant} the mean over {@link #INSTANT_SPAN_S} around the instant;
+ * band's interval before its key instant; {@code instant} read at the instant on the least-squares line over the
+ * {@link #INSTANT_SPAN_S} up to it (a key instant is where the motion changes: a centred mean would mix in what
+ * follows, the lift break's drop in Nz after a stall break);
  * {@code result} the analysis metric. No value is never held.
  */
 public final class PhaseJudge {
@@ -28,8 +30,8 @@ public final class PhaseJudge {
      * the technique has moved them (a live begin tends to come a little late).
      */
     public static final double ENTRY_SPAN_S = 1.0;
-    /** Values at a key instant are the mean over this span centred on it, s. */
-    public static final double INSTANT_SPAN_S = 0.2;
+    /** Values at a key instant are read on a least-squares line over this span up to it, s. */
+    public static final double INSTANT_SPAN_S = 0.25;
     /**
      * Time outside a throughout band that is let pass, s: transient spikes are ignored (as EASA AMC 25.103(b) does
      * for load factor in a stall entry), and a detected begin may lie a fraction of a second off the true one.
@@ -97,7 +99,7 @@ public final class PhaseJudge {
                     if (t == null) {
                         missing = "has no value: no " + b.instant() + " was found";
                     } else {
-                        valueSi = mean(history, name, t - half(INSTANT_SPAN_S), t + half(INSTANT_SPAN_S));
+                        valueSi = lineEnd(history, name, t - Math.round(INSTANT_SPAN_S * 1e9), t);
                     }
                     held = b.contains(valueSi);
                 }
@@ -204,10 +206,6 @@ public final class PhaseJudge {
         return mean(h, name, beginNs - Math.round(ENTRY_SPAN_S * 1e9), beginNs);
     }
 
-    private static long half(double spanS) {
-        return Math.round(spanS * 0.5e9);
-    }
-
     /** Mean of the finite samples from {@code fromNs} to {@code toNs}; NaN when there is none. */
     static double mean(PointHistory h, String name, long fromNs, long toNs) {
         double sum = 0;
@@ -232,6 +230,22 @@ public final class PhaseJudge {
             }
         }
         return fit.slope();
+    }
+
+    /**
+     * The least-squares line of the finite samples from {@code fromNs} to {@code toNs}, read at {@code toNs}; their
+     * mean under 3 samples.
+     */
+    static double lineEnd(PointHistory h, String name, long fromNs, long toNs) {
+        SlopeSums fit = new SlopeSums();
+        for (int i = h.firstAtOrAfter(fromNs); i < h.size() && h.timeNs(i) <= toNs; i++) {
+            double v = h.valueSi(name, i);
+            if (Double.isFinite(v)) {
+                fit.add((h.timeNs(i) - fromNs) * 1e-9, v);
+            }
+        }
+        double v = fit.at((toNs - fromNs) * 1e-9);
+        return Double.isNaN(v) ? mean(h, name, fromNs, toNs) : v;
     }
 
     /** A throughout band on a parameter {@code h} records: one that says what the point's condition is. */

@@ -97,6 +97,33 @@ class PhaseJudgeTest {
     }
 
     @Test
+    void aValueAtAKeyInstantIsReadOnTheLineUpToItNotOnWhatFollows() {
+        // Nz 0.92 g easing down 0.01 g/s into the break at 25 s, then the lift break drops it 1 g/s: a mean centred
+        // on the break took in the drop; the value is the one the aircraft had at the break
+        Random r = new Random(11);
+        double[] noise = new double[64 * 30 + 1];
+        for (int i = 0; i < noise.length; i++) {
+            noise[i] = 0.01 * r.nextGaussian();
+        }
+        PointHistory h = history("Nz", 30, t -> (t <= 25 ? 0.92 - 0.01 * (t - 25) : 0.92 - (t - 25))
+                + noise[(int) Math.round(t * 64)]);
+        Band nz = Band.ofTarget("Nz", null, BandPhase.INSTANT, "break", Double.NaN, Unit.G, 1.0, 0.1, 0.1);
+        PhaseJudge.Judged j = PhaseJudge.judge(point(ManoeuvreKind.STALL_LEVEL, Double.NaN, nz), 0, h, 0, 30 * S,
+                Map.of("break", 25 * S), Map.of());
+        SimpleRegression ref = new SimpleRegression();
+        for (int i = 0; i < h.size(); i++) {
+            long t = h.timeNs(i);
+            if (t >= 25 * S - Math.round(PhaseJudge.INSTANT_SPAN_S * 1e9) && t <= 25 * S) {
+                ref.addData((t - 25 * S) * 1e-9, h.valueSi("Nz", i));
+            }
+        }
+        // reference: Apache Commons Math SimpleRegression on the same samples, read at the instant (its intercept)
+        assertEquals(ref.getIntercept(), Unit.G.toSi(j.result().value()), 1e-9);
+        assertEquals(0.92, j.result().value(), 0.02, "the Nz flown at the break");
+        assertTrue(j.result().held(), j.toString());
+    }
+
+    @Test
     void aRateBandWithoutItsInstantIsNotHeldAndSaysWhy() {
         PointHistory h = history("KCAS", 30, t -> 140 - t);
         Band rate = Band.ofTarget("KCAS", null, BandPhase.RATE, "break", 10, Unit.KNOT_PER_SECOND, -1.0, 0.25, 0.25);

@@ -385,10 +385,10 @@ public final class PointFigure {
                 case INSTANT -> {
                     Long at = o.instantsNs().get(b.instant());
                     if (at != null) {
-                        // the judged span is 0.2 s: widened so the box can be seen at a figure's scale
-                        double half = Math.max(PhaseJudge.INSTANT_SPAN_S / 2,
-                                (o.endNs() - o.beginNs()) * 1e-9 * 0.01);
-                        out.add(new Shade(b, result, at * 1e-9 - half, at * 1e-9 + half, value(unit, low),
+                        // the judged span is the 0.25 s up to the instant: widened so the box can be seen at a
+                        // figure's scale
+                        double span = Math.max(PhaseJudge.INSTANT_SPAN_S, (o.endNs() - o.beginNs()) * 1e-9 * 0.02);
+                        out.add(new Shade(b, result, at * 1e-9 - span, at * 1e-9, value(unit, low),
                                 value(unit, high), Double.NaN, text));
                     }
                 }

@@ -77,7 +77,8 @@ public enum ManoeuvreKind {
                     m("hp-drift", Unit.FOOT_PER_MINUTE, "least-squares slope of pressure altitude over the hold"),
                     m("kcas-drift", Unit.KNOT_PER_MINUTE, "least-squares slope of calibrated airspeed over the hold"),
                     m("heading-drift", Unit.DEGREE_PER_MINUTE, "least-squares slope of heading over the hold"),
-                    m("hold-time", Unit.SECOND, "time the condition was held")));
+                    m("hold-time", Unit.SECOND, "time the condition was held, from the point's begin to its end"),
+                    m("steady-time", Unit.SECOND, "length of the steady window the averages and drifts are taken over")));
 
     private final String key;
     private final String displayName;

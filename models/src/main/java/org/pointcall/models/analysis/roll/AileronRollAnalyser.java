@@ -11,8 +11,8 @@ import org.pointcall.models.analysis.Series;
 import org.pointcall.shared.kind.ManoeuvreKind;
 
 /**
- * Aileron roll: {@code input} the detector's hint, else the first instant the aileron is beyond 5 % of its largest
- * deflection from its trim (at least 0.5 deg) in the point; the bank angle change accumulated from the input (unwrapped, across telemetry gaps on the branch the roll rate
+ * Aileron roll: {@code input} the detector's hint, else where the aileron leaves its trim on the way to the roll's
+ * deflection ({@link #aileronInput}); the bank angle change accumulated from the input (unwrapped, across telemetry gaps on the branch the roll rate
  * implies), {@code time-to-90} and
  * {@code time-to-360} the first instants it reaches 90 and 360 deg ({@code roll-end} the latter), interpolated
  * between samples; between the input and the roll's end, the peak roll rate (smoothed over 0.05 s each side), the
@@ -39,18 +39,7 @@ public final class AileronRollAnalyser implements ManoeuvreAnalyser {
         if (hint != null) {
             input = (hint - beginNs) * 1e-9;
         } else if (history.has("Aileron")) {
-            Series ail = Series.cleanOf(history, "Aileron", beginNs).between(0.0, endS);
-            double trim = ail.size() > 0 ? ail.v(0) : 0.0;
-            double most = 0;
-            for (int i = 0; i < ail.size(); i++) {
-                most = Math.max(most, Math.abs(ail.v(i) - trim));
-            }
-            for (int i = 0; i < ail.size() && most > Math.toRadians(1); i++) {
-                if (Math.abs(ail.v(i) - trim) > Math.max(Math.toRadians(0.5), 0.05 * most)) {
-                    input = ail.t(i);
-                    break;
-                }
-            }
+            input = aileronInput(Series.cleanOf(history, "Aileron", beginNs).between(0.0, endS));
         }
         if (Double.isNaN(input)) {
             input = 0.0;
@@ -148,5 +137,42 @@ public final class AileronRollAnalyser implements ManoeuvreAnalyser {
 
     private static double cross(double t0, double a, double t1, double b, double level) {
         return b == a ? t1 : t0 + (t1 - t0) * (level - a) / (b - a);
+    }
+
+    /**
+     * The input: the first instant the aileron is half-way to its largest deflection from the point's first sample
+     * marks the roll's own input; its trim is the median before that (the first sample may sit in a correction
+     * after the set-up); the input is the first sample of the unbroken run beyond 5 % of the deflection (at least
+     * 0.5 deg) from that trim which leads to the half-way instant. NaN without a deflection of at least 1 deg.
+     */
+    static double aileronInput(Series ail) {
+        if (ail.size() == 0) {
+            return Double.NaN;
+        }
+        double first = ail.v(0);
+        double most = 0;
+        for (int i = 0; i < ail.size(); i++) {
+            most = Math.max(most, Math.abs(ail.v(i) - first));
+        }
+        if (most <= Math.toRadians(1)) {
+            return Double.NaN;
+        }
+        int half = 0;
+        while (half < ail.size() && Math.abs(ail.v(half) - first) < 0.5 * most) {
+            half++;
+        }
+        double[] before = new double[half];
+        for (int i = 0; i < half; i++) {
+            before[i] = ail.v(i);
+        }
+        java.util.Arrays.sort(before);
+        double trim = half == 0 ? first : half % 2 == 1 ? before[half / 2]
+                : 0.5 * (before[half / 2 - 1] + before[half / 2]);
+        double threshold = Math.max(Math.toRadians(0.5), 0.05 * most);
+        int i = half;
+        while (i > 0 && Math.abs(ail.v(i - 1) - trim) > threshold) {
+            i--;
+        }
+        return ail.t(i);
     }
 }

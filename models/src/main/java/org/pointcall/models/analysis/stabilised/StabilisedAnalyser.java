@@ -19,10 +19,15 @@ import org.pointcall.shared.kind.ManoeuvreKind;
  * <li>the steady window: pressure altitude and KCAS, sampled every 0.25 s (so their sensor noise is independent
  *     from sample to sample: the test judges a drift against that noise), each through the filtered variance-ratio
  *     test of Cao and Rhinehart ({@link VarianceRatioTest}, recommended factors); the longest run of samples steady
- *     in both (unsteady stretches under 1 s inside it bridged: the ratio has false alarms), within the point, stretched back by the filters' memory (10 samples: a ratio turns steady only
- *     once the filtered deviation has forgotten the transient) but not before the begin; {@code start} and {@code end} its edges and
- *     {@code hold-time} its length. When the filters could not warm up within the point's pre-roll or no block is
+ *     in both (unsteady stretches under 1 s inside it bridged: the ratio has false alarms), within the point,
+ *     stretched back by the filters' memory (10 samples: a ratio turns steady only once the filtered deviation has
+ *     forgotten the transient) but not before the begin; {@code start} and {@code end} its edges and
+ *     {@code steady-time} its length. When the filters could not warm up within the point's pre-roll or no block is
  *     steady, the whole point is taken, with a note;</li>
+ * <li>{@code hold-time}: the point's own length, begin to end. A card point flown from its condition begins when
+ *     every throughout band is inside and ends when one breaks, so this is the time the condition was held (the
+ *     steady window is usually shorter: the test calls the settling still inside the bands unsteady, which is right
+ *     for choosing what to average and wrong for timing the hold);</li>
  * <li>drift rates: least-squares slopes over the window of pressure altitude, KCAS and (unwrapped) heading;</li>
  * <li>time-averaged conditions: mean and standard deviation over the window of Hp, KCAS, Mach, Nz, AoA and AoS
  *     ({@code <name>-mean}, {@code <name>-std}).</li>
@@ -67,7 +72,9 @@ public final class StabilisedAnalyser implements ManoeuvreAnalyser {
         r.instant("end", beginNs, b);
         String how = String.format(Locale.ROOT, "over the steady window %.1f to %.1f s (Cao-Rhinehart filtered "
                 + "variance ratio on Hp and KCAS every 0.25 s)", a, b);
-        r.metric("hold-time", b - a, "length of the steady window (Cao-Rhinehart filtered variance-ratio test)");
+        r.metric("hold-time", endS, "time from the point's begin to its end (on a card point flown from its condition:"
+                + " the time every throughout band was inside)");
+        r.metric("steady-time", b - a, "length of the steady window (Cao-Rhinehart filtered variance-ratio test)");
         for (String[] d : new String[][] {{"Hp", "hp-drift"}, {"KCAS", "kcas-drift"}}) {
             if (history.has(d[0])) {
                 r.metric(d[1], Series.cleanOf(history, d[0], beginNs).line(a, b).slope(),
