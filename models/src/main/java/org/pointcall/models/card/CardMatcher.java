@@ -102,10 +102,27 @@ public final class CardMatcher {
         return Optional.empty();
     }
 
-    /** The card point a detection of {@code kind} would bind to now, changing nothing; null when none. */
-    public TestPoint peek(ManoeuvreKind kind) {
-        int i = choose(kind);
-        return i < 0 ? null : card.points().get(i);
+    /**
+     * Fills {@code out} with every card point a detection of {@code kind} could bind to now, in the order
+     * {@link #bind(ManoeuvreKind, java.util.function.Predicate)} tries them: the armed point of that kind alone, else
+     * each awaiting flight in card order, then each to repeat. Changes nothing; allocates nothing.
+     */
+    public void candidates(ManoeuvreKind kind, List<TestPoint> out) {
+        out.clear();
+        if (armed >= 0 && card.points().get(armed).kind() == kind) {
+            out.add(card.points().get(armed));
+            return;
+        }
+        for (int j = 0; j < states.length; j++) {
+            if (card.points().get(j).kind() == kind && states[j].awaitsFlight() && j != armed) {
+                out.add(card.points().get(j));
+            }
+        }
+        for (int j = 0; j < states.length; j++) {
+            if (card.points().get(j).kind() == kind && states[j] == CardPointState.REPEAT) {
+                out.add(card.points().get(j));
+            }
+        }
     }
 
     /** The armed point of that kind, else the first awaiting flight, else the first to repeat; -1 for none. */

@@ -119,8 +119,14 @@ public final class CardSession {
     static final long POST_ROLL_NS = 3_000_000_000L;
     /** An ENDED event waiting for its post-roll, or null. */
     private PointEvent heldEnd;
-    /** Flies a card point with a hold from its condition when the classifier does not call it. */
-    private final ConditionWatch condition = new ConditionWatch();
+    /**
+     * Flies a card point with a hold from its condition when the classifier does not call it: one watch per card point
+     * a stabilised detection could bind to (the first pending one may never be flown on condition).
+     */
+    private final List<ConditionWatch> watches = new ArrayList<>();
+    private final List<TestPoint> candidates = new ArrayList<>();
+    /** The watch of the open point flown from its condition (while {@link #conditionPoint} is not 0). */
+    private ConditionWatch condition = new ConditionWatch();
     /** Id of the open point flown from its condition, or 0. */
     private long conditionPoint;
     private long conditionPoints;
@@ -308,8 +314,9 @@ public final class CardSession {
 
     /**
      * A stabilised card point the classifier does not call (it sees a hold only some way into it, on an airframe
-     * not trained on, never): when no point is open, the point the next stabilised detection would bind to is
-     * watched ({@link ConditionWatch}); on condition for {@link #ON_CONDITION_BEGIN_NS}, it is begun from when it came
+     * not trained on, never): when no point is open, every card point a stabilised detection could bind to is
+     * watched ({@link ConditionWatch}; a point flown off its condition must not keep the next one from being seen);
+     * the first on condition for {@link #ON_CONDITION_BEGIN_NS} is begun, bound to that card point, from when it came
      * on condition, and it ends when the condition breaks. A stabilised detection meanwhile is the same flight; any
      * other kind ends it.
      */
@@ -325,21 +332,42 @@ public final class CardSession {
             return;
         }
         if (active != null || heldEnd != null) {
-            condition.reset();
+            resetWatches(0);
             return;
         }
-        TestPoint p = matcher.peek(ManoeuvreKind.STABILISED);
-        if (p == null || !ConditionWatch.watchable(p, history)) {
-            condition.reset();
-            return;
+        matcher.candidates(ManoeuvreKind.STABILISED, candidates);
+        ConditionWatch on = null;
+        for (int k = 0; k < candidates.size(); k++) {
+            if (k == watches.size()) {
+                watches.add(new ConditionWatch());
+            }
+            ConditionWatch w = watches.get(k);
+            TestPoint p = candidates.get(k);
+            if (!ConditionWatch.watchable(p, history)) {
+                w.reset();
+                continue;
+            }
+            w.update(p, history, t);
+            if (on == null && w.onForNs(t) >= ON_CONDITION_BEGIN_NS) {
+                on = w;
+            }
         }
-        condition.update(p, history, t);
-        if (condition.onForNs(t) >= ON_CONDITION_BEGIN_NS) {
+        resetWatches(candidates.size());
+        if (on != null) {
+            condition = on;
+            TestPoint p = on.point();
             conditionPoint = CONDITION_IDS + ++conditionPoints;
             onPointEvent(new PointEvent(PointEvent.Type.BEGUN, conditionPoint, ManoeuvreKind.STABILISED,
                     condition.onSinceNs(), PointEvent.UNKNOWN_NS, t, t, 1.0, List.of(),
                     List.of(CONDITION_EVIDENCE + " every throughout band of " + p.id() + " inside from "
                             + String.format(java.util.Locale.ROOT, "%.1f", condition.onSinceNs() / 1e9) + " s")));
+        }
+    }
+
+    /** Forgets the condition of every watch from index {@code from} on. */
+    private void resetWatches(int from) {
+        for (int k = from; k < watches.size(); k++) {
+            watches.get(k).reset();
         }
     }
 
@@ -441,6 +469,7 @@ public final class CardSession {
 
     private void begin(PointEvent e) {
         Optional<TestPoint> bound = matcher == null ? Optional.empty()
+                : e.pointId() == conditionPoint ? matcher.bind(e.kind(), q -> q == condition.point())
                 : e.kind() == ManoeuvreKind.STABILISED ? matcher.bind(e.kind(), this::nearCondition)
                 : matcher.bind(e.kind());
         active = new Active(e, bound.orElse(null));

@@ -205,12 +205,16 @@ class CardSessionLiveTest {
     /** The Sparrel's 20 s hold at M 0.24 and 12,000 ft (its verdict card's TP-2), with {@code mach} as the target. */
     private static TestCard sparrelHold(double mach) {
         return CardFiles.parse(String.join("\n",
-                "sortie: T-10", "airframe: sparrel-a1", "points:",
-                "  - id: TP-2", "    kind: stabilised", "    title: Stabilised point", "    hold: 20", "    bands:",
+                "sortie: T-10", "airframe: sparrel-a1", "points:", holdPoint("TP-2", mach)), "hold.yaml", DICT);
+    }
+
+    private static String holdPoint(String id, double mach) {
+        return String.join("\n",
+                "  - id: " + id, "    kind: stabilised", "    title: Stabilised point", "    hold: 20", "    bands:",
                 "      - {parameter: Mach, phase: throughout, target: " + mach + ", tol: 0.005, unit: Mach}",
                 "      - {parameter: Hp, phase: throughout, target: 12000, tol: 100, unit: ft}",
                 "      - {parameter: Nz, phase: throughout, target: 1.0, tol: 0.05, unit: g}",
-                "      - {metric: hold-time, phase: result, min: 20, unit: s}", ""), "hold.yaml", DICT);
+                "      - {metric: hold-time, phase: result, min: 20, unit: s}", "");
     }
 
     /**
@@ -247,6 +251,20 @@ class CardSessionLiveTest {
         off.finish();
         assertTrue(off.outcomes().stream().noneMatch(x -> x.detection() >= CardSession.CONDITION_IDS),
                 off.outcomes()::toString);
+
+        // a card whose first stabilised point is not flown on condition (here never; in flight, flown off it): the
+        // hold on the second one's condition is still seen, and bound to it
+        TestCard two = CardFiles.parse(String.join("\n", "sortie: T-10", "airframe: sparrel-a1", "points:",
+                holdPoint("TP-0", 0.30), holdPoint("TP-2", 0.24)), "two.yaml", DICT);
+        CardSession second = new CardSession(SessionSetup.of(DICT, two, model.model(),
+                model.metadata().description(), CardAnalysers.standard()), e -> { });
+        frames.forEach(second::onFrame);
+        second.finish();
+        PointOutcome o2 = second.outcomes().stream().filter(x -> "TP-2".equals(x.cardId())).findFirst().orElseThrow(
+                () -> new AssertionError("TP-2 not flown: " + second.outcomes()));
+        assertTrue(o2.detection() >= CardSession.CONDITION_IDS, o2::toString);
+        assertEquals(o.verdict(), o2.verdict(), o2.reasons()::toString);
+        assertEquals(List.of("TP-0"), second.notFlown());
     }
 
     @Test
