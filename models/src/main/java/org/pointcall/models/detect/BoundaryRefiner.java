@@ -246,6 +246,15 @@ final class BoundaryRefiner {
                 && !(Double.isFinite(bank) && Math.abs(bank) >= s.steadyBankRad());
     }
 
+    /** Sideslip back within {@link #ZERO_BETA_RAD} of zero at kept state {@code i} (NaN: nothing against it). */
+    private boolean nearZeroBeta(int i) {
+        double b = h.value(i, PhysicalQuantity.AOS);
+        return !(Double.isFinite(b) && Math.abs(b) >= ZERO_BETA_RAD);
+    }
+
+    /** Sideslip this small is back to coordinated flight (2 deg: common practice, a vane's noise and trim). */
+    private static final double ZERO_BETA_RAD = Math.toRadians(2.0);
+
     /** Steady flight at kept state {@code i}: rates, bank and flight-path angle small (NaN quantities skipped). */
     private boolean steady(int i) {
         return steadyRates(i) && (!Double.isFinite(gamma[i]) || Math.abs(gamma[i]) < s.steadyGammaRad());
@@ -339,13 +348,17 @@ final class BoundaryRefiner {
             return NONE;
         }
         boolean stall = kind == ManoeuvreKind.STALL_LEVEL || kind == ManoeuvreKind.STALL_TURN;
+        boolean sideslip = kind == ManoeuvreKind.SIDESLIP;
         int from = stall ? pullOutBottom(core, i1) : core;
         if (from < 0) {
             return NONE;
         }
         int start = -1;
         for (int i = from; i < i1; i++) {
-            if (!(stall ? steadyRates(i) : steady(i))) {
+            // out of a stall the aircraft climbs back, out of a sideslip it may dive for the next point's speed: the
+            // flight path does not tell that either is over; a sideslip is over back near zero sideslip
+            boolean over = stall ? steadyRates(i) : sideslip ? steadyRates(i) && nearZeroBeta(i) : steady(i);
+            if (!over) {
                 start = -1;
                 continue;
             }

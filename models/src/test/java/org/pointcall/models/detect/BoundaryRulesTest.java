@@ -126,6 +126,33 @@ class BoundaryRulesTest {
         };
     }
 
+    /**
+     * A steady-heading sideslip: sideslip building to 12 deg from 10 to 13 s (3 deg of bank against it), held to
+     * 25 s, back to zero and wings level by 27 s; then a 10 deg dive for the next point's speed.
+     */
+    private static Physics sideslipThenDive() {
+        SplittableRandom r = new SplittableRandom(17L);
+        return (t, f, s) -> {
+            SyntheticSortie.level(t, f, s);
+            double beta = t < 10 ? 0 : t < 13 ? 4 * (t - 10) : t < 25 ? 12 : t < 27 ? 12 - 6 * (t - 25) : 0;
+            s.set(f, "AoS", beta + 0.1 * (2 * r.nextDouble() - 1));
+            s.set(f, "Roll", -beta / 4);
+            s.set(f, "Pitch", t < 27 ? 2.0 : -8.0);
+            s.set(f, "Hp", t < 27 ? 12000 : 12000 - 43 * (t - 27));
+        };
+    }
+
+    @Test
+    void aSideslipEndsBackAtZeroSideslipEvenWhenADiveFollows() {
+        // the classifier holds the sideslip 3 s past its end
+        Bump late = new Bump(ManoeuvreKind.SIDESLIP, 10.5, 30, 0.9);
+        PointEvent kept = run(DetectorSettings.defaults(), 70, sideslipThenDive(), late).onlyFinal();
+        assertEquals(ENDED, kept.type(), kept.evidence()::toString);
+        // back inside 2 deg of sideslip at 26.7 s: the dive that follows does not keep the sideslip open
+        assertEquals(26.7, s(kept.endNs()), 0.4, kept.evidence()::toString);
+        assertTrue(kept.hasEvidence("end moved to end-recovery"), kept.evidence()::toString);
+    }
+
     @Test
     void aStallsEntryIsTheSlowingIntoItsBreakAndItsRecoveryEndsAtThePullOutsBottom() {
         // the classifier rises in the set-up, at 3 s, and holds the stall to 24 s
