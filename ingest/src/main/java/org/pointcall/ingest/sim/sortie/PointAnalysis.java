@@ -253,6 +253,8 @@ final class PointAnalysis {
                 m.put("kcas-drift", Fits.rate(tr, KCAS, b, end));
                 m.put("heading-drift", headingRate(tr, b, end));
                 m.put("hold-time", tr.time(end) - tr.time(b));
+                // the simulated pilot's hold is steady from its start: the steady window is the whole hold
+                m.put("steady-time", tr.time(end) - tr.time(b));
             }
         }
         return new Result(in, m, through);
