@@ -222,14 +222,7 @@ public final class PhaseJudge {
 
     /** Least-squares slope, per second, of the finite samples from {@code fromNs} to {@code toNs}; NaN under 3. */
     static double slope(PointHistory h, String name, long fromNs, long toNs) {
-        SlopeSums fit = new SlopeSums();
-        for (int i = h.firstAtOrAfter(fromNs); i < h.size() && h.timeNs(i) <= toNs; i++) {
-            double v = h.valueSi(name, i);
-            if (Double.isFinite(v)) {
-                fit.add((h.timeNs(i) - fromNs) * 1e-9, v);
-            }
-        }
-        return fit.slope();
+        return fit(h, name, fromNs, toNs).slope();
     }
 
     /**
@@ -237,6 +230,12 @@ public final class PhaseJudge {
      * mean under 3 samples.
      */
     static double lineEnd(PointHistory h, String name, long fromNs, long toNs) {
+        double v = fit(h, name, fromNs, toNs).at((toNs - fromNs) * 1e-9);
+        return Double.isNaN(v) ? mean(h, name, fromNs, toNs) : v;
+    }
+
+    /** Least-squares sums of the finite samples from {@code fromNs} to {@code toNs}, time in s from {@code fromNs}. */
+    private static SlopeSums fit(PointHistory h, String name, long fromNs, long toNs) {
         SlopeSums fit = new SlopeSums();
         for (int i = h.firstAtOrAfter(fromNs); i < h.size() && h.timeNs(i) <= toNs; i++) {
             double v = h.valueSi(name, i);
@@ -244,8 +243,7 @@ public final class PhaseJudge {
                 fit.add((h.timeNs(i) - fromNs) * 1e-9, v);
             }
         }
-        double v = fit.at((toNs - fromNs) * 1e-9);
-        return Double.isNaN(v) ? mean(h, name, fromNs, toNs) : v;
+        return fit;
     }
 
     /** A throughout band on a parameter {@code h} records: one that says what the point's condition is. */
