@@ -21,6 +21,8 @@ public final class CardMatcher {
     private final CardPointState[] states;
     private final CardPointState[] before;
     private int armed = -1;
+    /** The candidates of one bind, reused: the binding order is {@link #candidates}'s alone. */
+    private final List<TestPoint> scratch = new java.util.ArrayList<>();
 
     public CardMatcher(TestCard card) {
         this.card = Objects.requireNonNull(card, "card");
@@ -82,18 +84,10 @@ public final class CardMatcher {
         if (armed >= 0 && card.points().get(armed).kind() == kind) {
             return bind(kind);
         }
-        int saved = armed;
-        for (int j = 0; j < states.length; j++) {
-            TestPoint p = card.points().get(j);
-            if (p.kind() == kind && states[j].awaitsFlight() && j != saved && accept.test(p)) {
-                before[j] = states[j];
-                states[j] = CardPointState.FLYING;
-                return Optional.of(p);
-            }
-        }
-        for (int j = 0; j < states.length; j++) {
-            TestPoint p = card.points().get(j);
-            if (p.kind() == kind && states[j] == CardPointState.REPEAT && accept.test(p)) {
+        candidates(kind, scratch);
+        for (TestPoint p : scratch) {
+            if (accept.test(p)) {
+                int j = index(p.id());
                 before[j] = states[j];
                 states[j] = CardPointState.FLYING;
                 return Optional.of(p);
@@ -127,21 +121,8 @@ public final class CardMatcher {
 
     /** The armed point of that kind, else the first awaiting flight, else the first to repeat; -1 for none. */
     private int choose(ManoeuvreKind kind) {
-        int i = -1;
-        if (armed >= 0 && card.points().get(armed).kind() == kind) {
-            i = armed;
-        }
-        for (int j = 0; i < 0 && j < states.length; j++) {
-            if (card.points().get(j).kind() == kind && states[j].awaitsFlight() && j != armed) {
-                i = j;
-            }
-        }
-        for (int j = 0; i < 0 && j < states.length; j++) {
-            if (card.points().get(j).kind() == kind && states[j] == CardPointState.REPEAT) {
-                i = j;
-            }
-        }
-        return i;
+        candidates(kind, scratch);
+        return scratch.isEmpty() ? -1 : index(scratch.get(0).id());
     }
 
     /** The flight bound to {@code cardId} is no longer this point (its detection changed kind): undo the bind. */

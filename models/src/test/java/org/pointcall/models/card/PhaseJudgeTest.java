@@ -42,6 +42,16 @@ class PhaseJudgeTest {
         return h;
     }
 
+    /** Gaussian noise of standard deviation {@code std} for each 64 Hz sample of 30 s. */
+    private static double[] noise(long seed, double std) {
+        Random r = new Random(seed);
+        double[] noise = new double[64 * 30 + 1];
+        for (int i = 0; i < noise.length; i++) {
+            noise[i] = std * r.nextGaussian();
+        }
+        return noise;
+    }
+
     private static TestPoint point(ManoeuvreKind kind, double holdS, Band... bands) {
         return new TestPoint("P-1", kind, "test point", "", holdS, List.of(bands));
     }
@@ -73,11 +83,7 @@ class PhaseJudgeTest {
 
     @Test
     void theRateBandIsTheLeastSquaresSlopeOverItsIntervalBeforeTheInstant() {
-        Random r = new Random(7);
-        double[] noise = new double[64 * 30 + 1];
-        for (int i = 0; i < noise.length; i++) {
-            noise[i] = 0.3 * r.nextGaussian();
-        }
+        double[] noise = noise(7, 0.3);
         PointHistory h = history("KCAS", 30, t -> 140 - 1.1 * t + noise[(int) Math.round(t * 64)]);
         Band rate = Band.ofTarget("KCAS", null, BandPhase.RATE, "break", 10, Unit.KNOT_PER_SECOND, -1.0, 0.25, 0.25);
         PhaseJudge.Judged j = PhaseJudge.judge(point(ManoeuvreKind.STALL_LEVEL, Double.NaN, rate), 0, h, 0,
@@ -100,11 +106,7 @@ class PhaseJudgeTest {
     void aValueAtAKeyInstantIsReadOnTheLineUpToItNotOnWhatFollows() {
         // Nz 0.92 g easing down 0.01 g/s into the break at 25 s, then the lift break drops it 1 g/s: a mean centred
         // on the break took in the drop; the value is the one the aircraft had at the break
-        Random r = new Random(11);
-        double[] noise = new double[64 * 30 + 1];
-        for (int i = 0; i < noise.length; i++) {
-            noise[i] = 0.01 * r.nextGaussian();
-        }
+        double[] noise = noise(11, 0.01);
         PointHistory h = history("Nz", 30, t -> (t <= 25 ? 0.92 - 0.01 * (t - 25) : 0.92 - (t - 25))
                 + noise[(int) Math.round(t * 64)]);
         Band nz = Band.ofTarget("Nz", null, BandPhase.INSTANT, "break", Double.NaN, Unit.G, 1.0, 0.1, 0.1);
