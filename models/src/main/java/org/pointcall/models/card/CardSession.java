@@ -124,6 +124,11 @@ public final class CardSession {
      * a stabilised detection could bind to (the first pending one may never be flown on condition).
      */
     private final List<ConditionWatch> watches = new ArrayList<>();
+    /**
+     * Beside each watch, one of steady flight near its point's condition: held there for the point's hold time, never
+     * on it, the point was flown off its condition (a flight to repeat, with the band it missed as the reason).
+     */
+    private final List<ConditionWatch> nearWatches = new ArrayList<>();
     private final List<TestPoint> candidates = new ArrayList<>();
     /** The watch of the open point flown from its condition (while {@link #conditionPoint} is not 0). */
     private ConditionWatch condition = new ConditionWatch();
@@ -327,7 +332,8 @@ public final class CardSession {
         if (conditionPoint != 0) {
             condition.update(condition.point(), history, t);
             if (condition.broken()) {
-                endCondition(t, condition.lastOnNs(), "left condition: " + condition.offBand() + " outside");
+                endCondition(t, condition.lastOnNs(), (condition.isNear() ? "left the steady hold near its condition: "
+                        : "left condition: ") + condition.offBand() + " outside");
             }
             return;
         }
@@ -337,30 +343,45 @@ public final class CardSession {
         }
         matcher.candidates(ManoeuvreKind.STABILISED, candidates);
         ConditionWatch on = null;
+        ConditionWatch off = null;
         for (int k = 0; k < candidates.size(); k++) {
             if (k == watches.size()) {
                 watches.add(new ConditionWatch());
+                nearWatches.add(ConditionWatch.near(NEAR_BAND_WIDTHS));
             }
             ConditionWatch w = watches.get(k);
+            ConditionWatch n = nearWatches.get(k);
             TestPoint p = candidates.get(k);
             if (!ConditionWatch.watchable(p, history)) {
                 w.reset();
+                n.reset();
                 continue;
             }
             w.update(p, history, t);
+            n.update(p, history, t);
             if (on == null && w.onForNs(t) >= ON_CONDITION_BEGIN_NS) {
                 on = w;
             }
+            if (off == null && n.onSinceNs() != ConditionWatch.NONE && n.onForNs(t) >= Math.round(p.holdS() * 1e9)
+                    && (w.lastOnNs() == ConditionWatch.NONE || w.lastOnNs() < n.onSinceNs())) {
+                off = n;
+            }
         }
         resetWatches(candidates.size());
+        if (on == null && off != null) {
+            on = off;
+        }
         if (on != null) {
             condition = on;
             TestPoint p = on.point();
             conditionPoint = CONDITION_IDS + ++conditionPoints;
+            String from = String.format(java.util.Locale.ROOT, "%.1f", condition.onSinceNs() / 1e9);
             onPointEvent(new PointEvent(PointEvent.Type.BEGUN, conditionPoint, ManoeuvreKind.STABILISED,
                     condition.onSinceNs(), PointEvent.UNKNOWN_NS, t, t, 1.0, List.of(),
-                    List.of(CONDITION_EVIDENCE + " every throughout band of " + p.id() + " inside from "
-                            + String.format(java.util.Locale.ROOT, "%.1f", condition.onSinceNs() / 1e9) + " s")));
+                    List.of(CONDITION_EVIDENCE + (on.isNear()
+                            ? " held steady near " + p.id() + "'s condition but not on it (every throughout band"
+                            + " within " + NEAR_BAND_WIDTHS + " band widths) from " + from + " s"
+                            : " every throughout band of " + p.id() + " inside from " + from + " s"))));
         }
     }
 
@@ -368,6 +389,7 @@ public final class CardSession {
     private void resetWatches(int from) {
         for (int k = from; k < watches.size(); k++) {
             watches.get(k).reset();
+            nearWatches.get(k).reset();
         }
     }
 

@@ -221,6 +221,7 @@ class CardSessionLiveTest {
      * A stabilised point on an airframe the default model never saw (the Sparrel; its classifier never calls this
      * hold, 0 of 16 on the held-out verdict set): the session flies it from its card condition, begun after 5 s on
      * condition from when it came on condition, ended when the condition broke, and judges it. With the card's
+     * Mach 0.015 off what was flown, the hold is near its condition and steady: a flight to repeat. With the card's
      * Mach 0.06 off what was flown there is no condition and no flight.
      */
     @Test
@@ -251,6 +252,21 @@ class CardSessionLiveTest {
         off.finish();
         assertTrue(off.outcomes().stream().noneMatch(x -> x.detection() >= CardSession.CONDITION_IDS),
                 off.outcomes()::toString);
+
+        // the same hold against a card point at Mach 0.255 +/- 0.005: held steady one band width below it for the
+        // hold, never on it, it is a flight of the point to repeat, with Mach as the reason (not nothing)
+        CardSession slow = new CardSession(SessionSetup.of(DICT, sparrelHold(0.255), model.model(),
+                model.metadata().description(), CardAnalysers.standard()), e -> { });
+        frames.forEach(slow::onFrame);
+        slow.finish();
+        PointOutcome os = slow.outcomes().stream().filter(x -> "TP-2".equals(x.cardId())).findFirst().orElseThrow(
+                () -> new AssertionError("the off-condition hold is not a flight of TP-2: " + slow.outcomes()));
+        assertTrue(os.detection() >= CardSession.CONDITION_IDS, os::toString);
+        assertEquals(Verdict.REPEAT, os.verdict());
+        assertTrue(os.reasons().get(0).text().startsWith("Mach held inside 0.255 +/- 0.005"),
+                os.reasons()::toString);
+        assertTrue(os.beginNs() / 1e9 <= tp.beginS() + 0.5 && os.endNs() / 1e9 >= tp.endS() - 0.5,
+                os.beginNs() / 1e9 + " to " + os.endNs() / 1e9 + " s against " + tp.beginS() + " to " + tp.endS());
 
         // a card whose first stabilised point is not flown on condition (here never; in flight, flown off it): the
         // hold on the second one's condition is still seen, and bound to it
