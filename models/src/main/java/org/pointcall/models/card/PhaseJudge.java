@@ -16,7 +16,8 @@ import org.pointcall.shared.outcome.Reason;
  * Judges one band of a flown point on its recorded history, by phase: {@code entry} the mean over
  * {@link #ENTRY_SPAN_S} up to the begin; {@code throughout} every sample from the begin to where the kind's
  * technique ends (the stall break, the wind-up's highest g, else the end), less a lead-in before the value first
- * comes inside ({@link #LEAD_IN_S}): held when the time outside is at most {@link #TRANSIENT_S} or, for a point
+ * comes inside ({@link #LEAD_IN_S}): held when the time outside is at most {@link #TRANSIENT_S} (and, where the span
+ * ends at a key instant, the value is not outside there for longer than {@link #HOLD_BRIDGE_S}) or, for a point
  * with a hold time, when one stretch inside (excursions up to {@link #HOLD_BRIDGE_S} bridged) lasts the hold;
  * {@code rate} the least-squares slope over the
  * band's interval before its key instant; {@code instant} read at the instant on the least-squares line over the
@@ -60,12 +61,18 @@ public final class PhaseJudge {
 
     /** Where the throughout bands of a kind stop applying. */
     public static long throughoutEndNs(ManoeuvreKind kind, Map<String, Long> instantsNs, long endNs) {
-        Long at = switch (kind) {
-            case STALL_LEVEL, STALL_TURN -> instantsNs.get("break");
-            case WIND_UP_TURN -> instantsNs.get("nz-max");
+        String name = keyInstantName(kind);
+        Long at = name == null ? null : instantsNs.get(name);
+        return at == null ? endNs : Math.min(endNs, at);
+    }
+
+    /** The key instant where a kind's throughout bands stop applying, or null when they apply to its end. */
+    private static String keyInstantName(ManoeuvreKind kind) {
+        return switch (kind) {
+            case STALL_LEVEL, STALL_TURN -> "break";
+            case WIND_UP_TURN -> "nz-max";
             default -> null;
         };
-        return at == null ? endNs : Math.min(endNs, at);
     }
 
     /**
@@ -113,15 +120,20 @@ public final class PhaseJudge {
                     held = b.contains(valueSi);
                 }
                 case THROUGHOUT -> {
-                    Span s = span(history, name, b, beginNs, throughoutEndNs(point.kind(), instantsNs, endNs));
+                    long toNs = throughoutEndNs(point.kind(), instantsNs, endNs);
+                    Span s = span(history, name, b, beginNs, toNs);
                     valueSi = s.worstSi;
                     outsideS = s.outsideS;
+                    // outside when the technique ends at its key instant (a bank growing into the stall break) is
+                    // not a transient that came back: only a sample or two of noise there is let pass
+                    boolean outAtInstant = toNs < endNs && s.trailingOutsideS > HOLD_BRIDGE_S;
                     held = s.samples > 0 && (point.hasHold() ? s.longestInsideS >= point.holdS() - 1e-9
-                            : s.outsideS <= TRANSIENT_S);
+                            : s.outsideS <= TRANSIENT_S && !outAtInstant);
                     if (s.samples == 0) {
                         missing = "has no samples in the point";
                     } else if (!held) {
-                        missing = point.hasHold() ? holdText(b, s, point.holdS()) : outsideText(b, s);
+                        missing = point.hasHold() ? holdText(b, s, point.holdS()) : outsideText(b, s)
+                                + (outAtInstant ? ", still outside at the " + keyInstantName(point.kind()) : "");
                     }
                 }
                 default -> throw new IllegalStateException("a parameter band has no phase " + b.phase());
@@ -294,6 +306,8 @@ public final class PhaseJudge {
         double longestInsideS;
         double worstSi = Double.NaN;
         boolean entered;
+        /** The time outside since the last sample inside, at the span's end, s (0 when it ends inside). */
+        double trailingOutsideS;
     }
 
     private static Span span(PointHistory h, String name, Band b, long fromNs, long toNs) {
@@ -341,6 +355,7 @@ public final class PhaseJudge {
                 }
             }
         }
+        s.trailingOutsideS = out;
         return s;
     }
 }

@@ -172,6 +172,27 @@ class PhaseJudgeTest {
     }
 
     @Test
+    void aBankGrowingOutOfItsBandIntoTheBreakIsNotATransient() {
+        Band roll = Band.ofTarget("Roll", null, BandPhase.THROUGHOUT, null, Double.NaN, Unit.DEGREE, 0, 5, 5);
+        TestPoint p = point(ManoeuvreKind.STALL_LEVEL, Double.NaN, roll);
+        // the wing goes down from 28 s, passes the band's edge at 29 s and is at 6.5 deg at the break at 30 s (a
+        // simulated sortie's case): outside for just under the transient allowance, but outside when the technique
+        // ends
+        PointHistory drift = history("Roll", 40, t -> t < 28 ? 0 : t < 29 ? -5 * (t - 28) : -5 - 1.5 * (t - 29));
+        PhaseJudge.Judged j = PhaseJudge.judge(p, 0, drift, 0, 40 * S, Map.of("break", 30 * S), Map.of());
+        assertFalse(j.result().held(), j.toString());
+        assertTrue(j.result().outsideS() <= PhaseJudge.TRANSIENT_S, j.toString());
+        assertEquals("Roll outside 0 +/- 5 deg for 1.0 s, reached -6 deg, still outside at the break",
+                j.reason().text());
+        // the same excursion 3 s before the break, back inside by it, is a transient
+        PointHistory back = history("Roll", 40, t -> t > 26.8 && t < 27.2 ? -6.5 : 0);
+        assertTrue(PhaseJudge.judge(p, 0, back, 0, 40 * S, Map.of("break", 30 * S), Map.of()).result().held());
+        // and a sample of noise just outside at the break is let pass
+        PointHistory spike = history("Roll", 40, t -> t > 29.9 ? 5.2 : 0);
+        assertTrue(PhaseJudge.judge(p, 0, spike, 0, 40 * S, Map.of("break", 30 * S), Map.of()).result().held());
+    }
+
+    @Test
     void aHoldPointNeedsOneUnbrokenStretchInsideAsLongAsItsHold() {
         Band kcas = Band.ofTarget("KCAS", null, BandPhase.THROUGHOUT, null, Double.NaN, Unit.KNOT, 250, 2, 2);
         // inside from 0 to 18 s, a 1 s excursion, inside again 19 to 40 s: 21 s at most in one stretch
