@@ -21,6 +21,8 @@ public final class CardMatcher {
     private final CardPointState[] states;
     private final CardPointState[] before;
     private int armed = -1;
+    /** Index of the point of the latest completed flight (good or repeat), or -1. */
+    private int lastCompleted = -1;
     /** The candidates of one bind, reused: the binding order is {@link #candidates}'s alone. */
     private final List<TestPoint> scratch = new java.util.ArrayList<>();
 
@@ -133,8 +135,35 @@ public final class CardMatcher {
         }
     }
 
-    /** The flight bound to {@code cardId} is over with {@code verdict} (or the engineer called it). */
+    /**
+     * The point the card goes on with: the armed one, else the first in card order after the latest completed flight
+     * (good or repeat; from the start of the card before any) still waiting for a flight, else the first waiting
+     * anywhere; empty when none waits.
+     */
+    public Optional<TestPoint> next() {
+        if (armed >= 0) {
+            return Optional.of(card.points().get(armed));
+        }
+        for (int k = 1; k <= states.length; k++) {
+            int j = (lastCompleted + k) % states.length;
+            if (states[j].awaitsFlight()) {
+                return Optional.of(card.points().get(j));
+            }
+        }
+        return Optional.empty();
+    }
+
+    /** The flight bound to {@code cardId} is over with {@code verdict}: where the card stands and goes on from. */
     public void settle(String cardId, Verdict verdict) {
+        int i = index(cardId);
+        overrule(cardId, verdict);
+        if (verdict != Verdict.INCOMPLETE) {
+            lastCompleted = i;
+        }
+    }
+
+    /** The engineer called the latest flight of {@code cardId}: its state, not where the card goes on from. */
+    public void overrule(String cardId, Verdict verdict) {
         int i = index(cardId);
         states[i] = switch (verdict) {
             case GOOD -> CardPointState.GOOD;

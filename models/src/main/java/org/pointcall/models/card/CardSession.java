@@ -126,7 +126,8 @@ public final class CardSession {
     private final List<ConditionWatch> watches = new ArrayList<>();
     /**
      * Beside each watch, one of steady flight near its point's condition: held there for the point's hold time, never
-     * on it, the point was flown off its condition (a flight to repeat, with the band it missed as the reason).
+     * on it, when the point is the one the card goes on with ({@link CardMatcher#next}), the point was flown off its
+     * condition (a flight to repeat, with the band it missed as the reason).
      */
     private final List<ConditionWatch> nearWatches = new ArrayList<>();
     private final List<TestPoint> candidates = new ArrayList<>();
@@ -321,9 +322,11 @@ public final class CardSession {
      * A stabilised card point the classifier does not call (it sees a hold only some way into it, on an airframe
      * not trained on, never): when no point is open, every card point a stabilised detection could bind to is
      * watched ({@link ConditionWatch}; a point flown off its condition must not keep the next one from being seen);
-     * the first on condition for {@link #ON_CONDITION_BEGIN_NS} is begun, bound to that card point, from when it came
-     * on condition, and it ends when the condition breaks. A stabilised detection meanwhile is the same flight; any
-     * other kind ends it.
+     * the first on condition for {@link #ON_CONDITION_BEGIN_NS} (when it is the point the card goes on with,
+     * {@link CardMatcher#next}; for its whole hold when it is not) is begun, bound to that card point, from when it
+     * came on condition, and it ends when the condition breaks. A stabilised detection meanwhile is the same flight;
+     * any other kind ends it. The card's next point held steady near its condition but never on it, for its hold, is
+     * flown off condition: begun the same way, and judged (REPEAT, with the band it missed).
      */
     private void watchCondition(long t) {
         if (matcher == null || finishing) {
@@ -342,6 +345,9 @@ public final class CardSession {
             return;
         }
         matcher.candidates(ManoeuvreKind.STABILISED, candidates);
+        // off its condition, a steady hold is a flight only of the point the card goes on with: setting up in
+        // transit for the next point is steady flight too, and often near a later hold's condition
+        TestPoint next = matcher.next().orElse(null);
         ConditionWatch on = null;
         ConditionWatch off = null;
         for (int k = 0; k < candidates.size(); k++) {
@@ -359,10 +365,14 @@ public final class CardSession {
             }
             w.update(p, history, t);
             n.update(p, history, t);
-            if (on == null && w.onForNs(t) >= ON_CONDITION_BEGIN_NS) {
+            long holdNs = Math.round(p.holdS() * 1e9);
+            // a point out of the card's order is taken once held for its hold: on its condition for a few seconds
+            // while setting up for the next point (a sideslip at the same speed and height) is not a flight of it
+            if (on == null && w.onForNs(t) >= (p == next ? ON_CONDITION_BEGIN_NS
+                    : Math.max(ON_CONDITION_BEGIN_NS, holdNs))) {
                 on = w;
             }
-            if (off == null && n.onSinceNs() != ConditionWatch.NONE && n.onForNs(t) >= Math.round(p.holdS() * 1e9)
+            if (off == null && p == next && n.onForNs(t) >= holdNs
                     && (w.lastOnNs() == ConditionWatch.NONE || w.lastOnNs() < n.onSinceNs())) {
                 off = n;
             }
@@ -706,7 +716,7 @@ public final class CardSession {
                 PointOutcome o = outcomes.get(i).withOperatorCall(oc);
                 outcomes.set(i, o);
                 if (matcher.state(call.cardId()) != CardPointState.FLYING) {
-                    matcher.settle(call.cardId(), call.call());
+                    matcher.overrule(call.cardId(), call.call());
                 }
                 emit(new SessionEvent.CallTaken(oc, o.verdict()));
             }

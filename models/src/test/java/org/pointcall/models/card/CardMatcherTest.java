@@ -88,6 +88,32 @@ class CardMatcherTest {
     }
 
     @Test
+    void theCardGoesOnAfterItsLatestCompletedFlight() {
+        CardMatcher m = new CardMatcher(CARD);
+        java.util.function.Supplier<String> next = () -> m.next().map(TestPoint::id).orElse("none");
+        assertEquals("SL-1", next.get(), "the card's first point before anything is flown");
+        bind(m, ManoeuvreKind.LOOP);
+        m.settle("LP-1", Verdict.GOOD);
+        assertEquals("SL-2", next.get(), "after LP-1, the next waiting point after it, not SL-1 left behind");
+        bind(m, ManoeuvreKind.STALL_LEVEL);
+        m.settle("SL-1", Verdict.INCOMPLETE);
+        assertEquals("SL-2", next.get(), "an abandoned flight does not move the card on");
+        bind(m, ManoeuvreKind.LOOP);
+        m.settle("LP-2", Verdict.REPEAT);
+        assertEquals("SL-1", next.get(), "past the card's end, the first still waiting");
+        m.overrule("LP-1", Verdict.REPEAT);
+        assertEquals("SL-1", next.get(), "the engineer's call on an earlier point does not move the card back");
+        m.arm("SL-2");
+        assertEquals("SL-2", next.get(), "the armed point");
+        m.disarm();
+        bind(m, ManoeuvreKind.STALL_LEVEL);
+        m.settle("SL-1", Verdict.GOOD);
+        bind(m, ManoeuvreKind.STALL_LEVEL);
+        m.settle("SL-2", Verdict.GOOD);
+        assertEquals("none", next.get(), "nothing waits: the points to repeat are the engineer's to arm");
+    }
+
+    @Test
     void unknownPointsAreRefused() {
         CardMatcher m = new CardMatcher(CARD);
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> m.arm("XX-9"));
