@@ -31,6 +31,8 @@ final class ConditionWatch {
 
     /** Time constant of the smoothing a near watch's steadiness test runs on, s (sensor noise out, drift in). */
     static final double SMOOTHING_S = 1.0;
+    /** A near watch's parameter is steady while its smoothed value moves over no more than this many band widths. */
+    static final double STEADY_WIDTHS = 0.5;
 
     private final double widen;
     private TestPoint point;
@@ -137,7 +139,7 @@ final class ConditionWatch {
                 inside = false;
                 out = out == null ? b.parameter() : out;
             } else if (pad > 0 && onSinceNs != NONE
-                    && Math.max(highest[i], smooth[i]) - Math.min(lowest[i], smooth[i]) > width) {
+                    && Math.max(highest[i], smooth[i]) - Math.min(lowest[i], smooth[i]) > STEADY_WIDTHS * width) {
                 inside = false;
                 out = out == null ? b.parameter() + " (not steady)" : out;
             }

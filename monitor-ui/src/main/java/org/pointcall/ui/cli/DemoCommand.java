@@ -205,12 +205,19 @@ public final class DemoCommand implements Callable<Integer> {
         return t;
     }
 
-    /** Prints the stream and the log as they come, until the sortie ends. */
+    /**
+     * Prints the stream and the log as they come, until the sortie ends; then ends the session (the point being
+     * flown when the stream stopped is closed and judged) and prints what that adds to the log.
+     */
     private static void headless(LiveConsole live, Thread sim, PrintWriter out) throws InterruptedException {
         int logShown = 0;
         long nextStatus = 0;
         while (true) {
             boolean done = !sim.isAlive();
+            if (done) {
+                Thread.sleep(200); // the last datagrams through the pipeline
+                live.close();
+            }
             DeskSnapshot s = live.link().latest();
             List<LogEntry> log = s.log();
             for (int i = Math.min(logShown, log.size()); i < log.size(); i++) {

@@ -154,9 +154,18 @@ public final class LiveConsole implements AutoCloseable {
         return clock;
     }
 
-    /** Stops receiving, drains the pipeline and ends the session (a point in flight becomes incomplete). */
+    private boolean closed;
+
+    /**
+     * Stops receiving, drains the pipeline and ends the session (a point in flight becomes incomplete, unless it has
+     * already lasted its hold). Once; later calls do nothing.
+     */
     @Override
     public void close() {
+        if (closed) {
+            return;
+        }
+        closed = true;
         rig.close();
         CardSession s = session;
         if (s != null) {
