@@ -47,13 +47,18 @@ public final class BoundaryRules {
      * roll rate is up, from quiet ({@link RollWatch}).
      */
     public static final String ROLL_SIGNATURE = "roll-signature";
+    /**
+     * A stabilised point is found in the air data and attitude alone, without the classifier: steady, unaccelerated,
+     * wings-level flight held for {@code HoldWatch}'s minimum ({@link HoldWatch}).
+     */
+    public static final String HOLD_SIGNATURE = "hold-signature";
     /** Long points (level acceleration, phugoid, stabilised) bridge longer gaps of their own kind. */
     public static final String FRAGMENT_MERGE = "fragment-merge";
 
     /** Every boundary rule name, in documentation order. */
     public static final List<String> NAMES = List.of(BEGIN_DEPARTURE, END_RECOVERY, ACCEL_EXTENT, ACCEL_GAIN,
-            ACCEL_LEVEL, ACCEL_SETTLED_ENTRY, DOUBLET_SIGNATURE, FRAGMENT_MERGE, PHYSICS_ENTRY, ROLL_SIGNATURE,
-            STABILISED_EXTENT, STALL_BANK);
+            ACCEL_LEVEL, ACCEL_SETTLED_ENTRY, DOUBLET_SIGNATURE, FRAGMENT_MERGE, HOLD_SIGNATURE, PHYSICS_ENTRY,
+            ROLL_SIGNATURE, STABILISED_EXTENT, STALL_BANK);
 
     private BoundaryRules() {
     }
@@ -79,7 +84,7 @@ public final class BoundaryRules {
             case LEVEL_ACCEL:
                 return List.of(ACCEL_EXTENT, ACCEL_GAIN, ACCEL_LEVEL, ACCEL_SETTLED_ENTRY, FRAGMENT_MERGE);
             case STABILISED:
-                return List.of(STABILISED_EXTENT, FRAGMENT_MERGE);
+                return List.of(STABILISED_EXTENT, FRAGMENT_MERGE, HOLD_SIGNATURE);
             default:
                 return List.of();
         }

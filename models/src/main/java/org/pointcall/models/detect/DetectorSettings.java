@@ -155,7 +155,7 @@ public record DetectorSettings(Smoothing smoothing, double smoothingS, double en
         m.put(ManoeuvreKind.PHUGOID, 30.0);
         m.put(ManoeuvreKind.SIDESLIP, 8.0);
         m.put(ManoeuvreKind.AILERON_ROLL, 2.0);
-        m.put(ManoeuvreKind.STABILISED, 8.0);
+        m.put(ManoeuvreKind.STABILISED, 15.0);
         return m;
     }
 

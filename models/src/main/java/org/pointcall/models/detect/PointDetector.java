@@ -95,6 +95,15 @@ public final class PointDetector implements Detector {
     private String physicsFailure;
     /** {@code roll-signature}: rolls found in the roll rate and bank alone; -1 when off or not a class. */
     private final RollWatch rolls = new RollWatch();
+    private final HoldWatch holdWatch = new HoldWatch();
+    /** Class of the stabilised point when {@code hold-signature} applies, else -1. */
+    private final int holdClass;
+    /** The open point is a hold found by {@code hold-signature}. */
+    private boolean physicsHold;
+    /** Start of the steady run the open physics hold was begun on. */
+    private long holdRunNs = NONE;
+    /** A run of steady flight must last the stabilised point's minimum duration before it is one. */
+    private final long holdMinNs;
     private final int rollClass;
     /** The open point was opened by the roll watch. */
     private boolean physicsRoll;
@@ -233,6 +242,10 @@ public final class PointDetector implements Detector {
         int r = classes.indexOf(ManoeuvreKind.AILERON_ROLL);
         this.rollClass = r >= 0 && BoundaryRules.applies(BoundaryRules.ROLL_SIGNATURE, ManoeuvreKind.AILERON_ROLL,
                 settings) ? r : -1;
+        int h = classes.indexOf(ManoeuvreKind.STABILISED);
+        this.holdClass = h >= 0 && BoundaryRules.applies(BoundaryRules.HOLD_SIGNATURE, ManoeuvreKind.STABILISED,
+                settings) ? h : -1;
+        this.holdMinNs = Math.round(settings.minDurationS(ManoeuvreKind.STABILISED) * 1e9);
         this.muted = new boolean[n];
         this.muteUntilNs = new long[n];
         this.recoveryWaitNs = Math.round(settings.boundaries().recoveryWaitS() * 1e9);
@@ -264,6 +277,8 @@ public final class PointDetector implements Detector {
         doublets.clear();
         rolls.clear();
         physicsRoll = false;
+        holdWatch.clear();
+        physicsHold = false;
         physicsPoint = false;
         physicsFailure = null;
         java.util.Arrays.fill(muted, false);
@@ -297,6 +312,9 @@ public final class PointDetector implements Detector {
         }
         if (rollClass >= 0) {
             rolls.onState(state);
+        }
+        if (holdClass >= 0) {
+            holdWatch.onState(state);
         }
         historyNs[historyNext] = t;
         state.copyTo(historyValues, historySampledNs, historyNext * PhysicalQuantity.COUNT);
@@ -457,10 +475,22 @@ public final class PointDetector implements Detector {
             // found while another point was open, or given up: not a point of its own
             doublets.reset();
         }
+        if (physicsHold) {
+            followPhysicsHold(now, top);
+            return;
+        }
         if (phase == IDLE) {
             int c = strongestOn(-1);
             if (c >= 0) {
                 begin(c, now, top);
+            } else if (holdClass >= 0 && holdWatch.holding()) {
+                long b = holdWatch.steadySinceNs();
+                if (lastEndNs != NONE) {
+                    b = Math.max(b, lastEndNs);
+                }
+                if (holdWatch.lastSteadyNs() - b >= holdMinNs) {
+                    beginPhysicsHold(now, b);
+                }
             }
             return;
         }
@@ -815,6 +845,51 @@ public final class PointDetector implements Detector {
         }
     }
 
+    /**
+     * {@code hold-signature}: opens a stabilised point found in steady flight ({@link HoldWatch}) that the classifier
+     * does not call, begun where the steady run began (not before the last point's end).
+     */
+    private void beginPhysicsHold(long now, long b) {
+        int c = holdClass;
+        classifierBeginNs = b;
+        pointAssisted = false;
+        restart(c, b);
+        for (GuardRule rule : rules[c]) {
+            lookBack(rule, b);
+        }
+        open(c, b, now);
+        physicsHold = true;
+        holdRunNs = holdWatch.steadySinceNs();
+        emit(PointEvent.Type.BEGUN, now, NONE, List.of(), List.of("entered: " + BoundaryRules.HOLD_SIGNATURE + ": "
+                + holdWatch.describe()), PHYSICS_CONFIDENCE);
+    }
+
+    /** The open physics hold: ended where steady flight ended, or where another kind the classifier calls began. */
+    private void followPhysicsHold(long now, String[] top) {
+        int c = pointClass;
+        int j = strongestOn(c);
+        // the run the hold was begun on (a new one may have started since the last tick)
+        boolean same = holdWatch.holding() && holdWatch.steadySinceNs() == holdRunNs;
+        if (same && (j < 0 || j == c)) {
+            return;
+        }
+        long end = same ? now : holdWatch.endedRunNs();
+        String how = same ? classes.name(j) + " began" : "steady flight ended";
+        if (j >= 0 && j != c) {
+            end = Math.min(end, Math.max(beginNs, riseEstimate(j)));
+        }
+        physicalEndNs = end;
+        for (GuardRule r : rules[c]) {
+            r.mark();
+        }
+        physicsHold = false;
+        close(now, end, "ended by " + BoundaryRules.HOLD_SIGNATURE + ": " + how, NONE);
+        holdWatch.reset();
+        if (j >= 0 && j != c) {
+            begin(j, now, top);
+        }
+    }
+
     /** A roll's core (its highest rates) is looked for up to this long after the rate fell back. */
     private static final long ROLL_CORE_AFTER_NS = 500_000_000L;
 
@@ -1158,7 +1233,16 @@ public final class PointDetector implements Detector {
     @Override
     public void finish(long timeNs) {
         long now = lastTickNs == NONE ? timeNs : Math.max(timeNs, lastTickNs);
-        if (physicsRoll) {
+        if (physicsHold) {
+            for (GuardRule r : rules[pointClass]) {
+                r.mark();
+            }
+            physicsHold = false;
+            long e = holdWatch.holding() && holdWatch.steadySinceNs() == holdRunNs ? holdWatch.lastSteadyNs()
+                    : holdWatch.endedRunNs() != NONE ? holdWatch.endedRunNs() : now;
+            physicalEndNs = e;
+            close(now, e, "ended by finish", NONE);
+        } else if (physicsRoll) {
             for (GuardRule r : rules[pointClass]) {
                 r.mark();
             }

@@ -458,4 +458,40 @@ class BoundaryRulesTest {
                 () -> BoundarySettings.defaults().withSteadyDwellS(0));
         assertTrue(b.getMessage().contains("steadyDwellS must be a finite number above 0"), b.getMessage());
     }
+
+    @Test
+    void theHoldSignatureFindsAHoldTheClassifierNeverCallsAndEndsItWhereTheClimbBegins() {
+        // level and steady at 250 KCAS and 10,000 ft until 40 s, then a 1,000 ft/min climb; the classifier sees
+        // nothing (its probabilities are noise around 0.05)
+        Physics holdThenClimb = (t, f, x) -> {
+            SyntheticSortie.level(t, f, x);
+            x.set(f, "Hp", t < 40 ? 10000.0 : 10000.0 + 1000.0 / 60 * (t - 40));
+            x.set(f, "Pitch", t < 40 ? 3.0 : 6.0);
+        };
+        SyntheticSortie s = SyntheticSortie.withHolds(DetectorSettings.defaults())
+                .run(60, new Probabilities(7L, 0.05, 0.01), holdThenClimb).finish();
+        assertWellFormed(s.events);
+        PointEvent hold = s.onlyFinal();
+        assertEquals(ManoeuvreKind.STABILISED, hold.kind());
+        assertEquals(ENDED, hold.type());
+        assertTrue(hold.beginNs() / 1e9 < 5, "begun where the steady run began: " + hold);
+        assertEquals(40.0, hold.endNs() / 1e9, 1.5, "ended where the climb began: " + hold);
+        assertTrue(hold.hasEvidence("ended by " + BoundaryRules.HOLD_SIGNATURE + ": steady flight ended"),
+                hold.evidence()::toString);
+        PointEvent begun = s.events.get(0);
+        assertEquals(PointEvent.Type.BEGUN, begun.type());
+        assertTrue(begun.reportedAtNs() - begun.beginNs() >= 15_000_000_000L,
+                "reported once held for the stabilised minimum duration: " + begun);
+        // switched off: nothing (the classifier alone never calls it)
+        SyntheticSortie off = SyntheticSortie.withHolds(without(BoundaryRules.HOLD_SIGNATURE))
+                .run(60, new Probabilities(7L, 0.05, 0.01), holdThenClimb).finish();
+        assertTrue(off.events.isEmpty(), off.events::toString);
+        // 12 s of steady flight before the climb is shorter than the minimum: no point
+        Physics shortHold = (t, f, x) -> {
+            SyntheticSortie.level(t, f, x);
+            x.set(f, "Hp", t < 12 ? 10000.0 : 10000.0 + 1000.0 / 60 * (t - 12));
+        };
+        assertTrue(SyntheticSortie.withHolds(DetectorSettings.defaults())
+                .run(30, new Probabilities(7L, 0.05, 0.01), shortHold).finish().events.isEmpty());
+    }
 }

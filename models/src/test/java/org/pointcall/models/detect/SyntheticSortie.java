@@ -112,16 +112,36 @@ final class SyntheticSortie {
     private final double[] p = new double[CLASSES.size()];
     private long k;
 
+    /**
+     * A synthetic sortie with {@code hold-signature} switched off: these sorties pad each manoeuvre with perfectly
+     * steady level flight, which that rule rightly takes for a stabilised point; tests of the other rules do not want
+     * it. {@link #withHolds} keeps it.
+     */
     SyntheticSortie(DetectorSettings settings) {
         this(settings, dictionary());
     }
 
     SyntheticSortie(DetectorSettings settings, ParameterDictionary d) {
+        this(settings, d, false);
+    }
+
+    private SyntheticSortie(DetectorSettings settings, ParameterDictionary d, boolean holds) {
         this.dictionary = d;
         this.slots = new Slots(d);
         this.frame = Frame.forDictionary(d);
-        this.detector = PointDetector.bind(d, CLASSES, settings, events::add);
+        DetectorSettings st = settings;
+        if (!holds) {
+            java.util.Set<String> off = new java.util.HashSet<>(settings.disabledRules());
+            off.add(BoundaryRules.HOLD_SIGNATURE);
+            st = settings.withDisabledRules(off);
+        }
+        this.detector = PointDetector.bind(d, CLASSES, st, events::add);
         detector.init(0L);
+    }
+
+    /** A synthetic sortie whose detector keeps {@code hold-signature} (as the settings say). */
+    static SyntheticSortie withHolds(DetectorSettings settings) {
+        return new SyntheticSortie(settings, dictionary(), true);
     }
 
     /** The test dictionary: the quantities the rules read, in the trade's units, minus {@code omit}. */
