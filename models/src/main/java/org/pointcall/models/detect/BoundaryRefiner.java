@@ -337,6 +337,19 @@ final class BoundaryRefiner {
      * {@code beginNs}, seen by {@code nowNs}; NONE when there is none yet.
      */
     long recoveryEnd(ManoeuvreKind kind, long beginNs, long coreUntilNs, long nowNs) {
+        return recovery(kind, beginNs, coreUntilNs, nowNs, false);
+    }
+
+    /**
+     * {@code end-recovery} once the wait for it is over: the end of the longest steady stretch after the core, when it
+     * lasted at least a quarter of the dwell (the pilot went on to the next point before steady flight had been held
+     * for the whole dwell); NONE when there is none.
+     */
+    long settledRecoveryEnd(ManoeuvreKind kind, long beginNs, long coreUntilNs, long nowNs) {
+        return recovery(kind, beginNs, coreUntilNs, nowNs, true);
+    }
+
+    private long recovery(ManoeuvreKind kind, long beginNs, long coreUntilNs, long nowNs, boolean longest) {
         int i0 = h.indexAtOrAfter(beginNs);
         int i1 = h.indexAtOrAfter(nowNs + 1);
         if (i1 - i0 < 4) {
@@ -354,6 +367,8 @@ final class BoundaryRefiner {
             return NONE;
         }
         int start = -1;
+        double bestS = s.steadyDwellS() / 4;
+        long best = NONE;
         for (int i = from; i < i1; i++) {
             // out of a stall the aircraft climbs back, out of a sideslip it may dive for the next point's speed: the
             // flight path does not tell that either is over; a sideslip is over back near zero sideslip
@@ -365,13 +380,18 @@ final class BoundaryRefiner {
             if (start < 0) {
                 start = i;
             }
-            if (ts[i] - ts[start] >= s.steadyDwellS()) {
+            double heldS = ts[i] - ts[start];
+            if (heldS >= s.steadyDwellS()) {
                 // a sideslip is flown steady: it is over when it is back at zero sideslip, wings level, which the
                 // dwell confirms; a stall, roll or wind-up turn is over once steady flight has been held
                 return kind == ManoeuvreKind.SIDESLIP ? h.timeNs(start) : h.timeNs(i);
             }
+            if (longest && heldS >= bestS) {
+                bestS = heldS;
+                best = kind == ManoeuvreKind.SIDESLIP ? h.timeNs(start) : h.timeNs(i);
+            }
         }
-        return NONE;
+        return best;
     }
 
     /** The last sample of the manoeuvre's core in [i0, ic), with what follows up to i1; or -1. */

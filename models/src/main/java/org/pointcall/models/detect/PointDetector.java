@@ -827,6 +827,11 @@ public final class PointDetector implements Detector {
         if (e == NONE && j < 0 && !waited) {
             return;
         }
+        if (e == NONE && recovers[c]) {
+            // the wait is over (or another kind entered): the roll ended where it came nearest to steady flight
+            e = refiner.settledRecoveryEnd(ManoeuvreKind.AILERON_ROLL, beginNs, rolls.endNs() + ROLL_CORE_AFTER_NS,
+                    j >= 0 ? Math.max(rolls.endNs(), riseEstimate(j)) : now);
+        }
         physicalEndNs = e;
         for (GuardRule r : rules[c]) {
             r.mark();

@@ -337,6 +337,24 @@ class BoundaryRulesTest {
     }
 
     @Test
+    void aRollWhoseSteadyRecoveryIsCutShortEndsWhereItCameNearestToSteadyFlight() {
+        // the same roll, but 1.2 s after it (less than the 2 s dwell) the pilot rolls into a 45 deg turn and holds
+        // it: never 2 s of steady flight after the roll, so at the end of the wait the roll ends at its 1.2 s of
+        // steady flight (a Sparrel sortie's case: the roll had ended at the end of the rolling, 4 s short)
+        Physics rollThenTurn = (t, f, x) -> {
+            roll().fill(t, f, x);
+            if (t >= 15.6) {
+                x.set(f, "Roll", Math.min(45.0, 15.0 * (t - 15.6)));
+                x.set(f, "P", t < 18.6 ? 15.0 : 0.0);
+            }
+        };
+        PointEvent kept = run(DetectorSettings.defaults(), 60, rollThenTurn).onlyFinal();
+        assertEquals(ENDED, kept.type(), kept.evidence()::toString);
+        assertEquals(ManoeuvreKind.AILERON_ROLL, kept.kind());
+        assertEquals(15.6, s(kept.endNs()), 0.3, kept.evidence()::toString);
+    }
+
+    @Test
     void aRollEndsTheSpeedUpStillWaitingForItsEndAndIsAPointOfItsOwn() {
         // a gain of speed from 10 to 70 s that then holds its highest speed (so the level acceleration waits for the
         // drop that ends it), then a full roll at 150 deg/s from 80 s
