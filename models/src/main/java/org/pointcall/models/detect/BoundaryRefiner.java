@@ -430,6 +430,8 @@ final class BoundaryRefiner {
             case SIDESLIP:
                 return lastAbove(i0, ic, null, 0.0, 2.0 / 3.0);
             case WIND_UP_TURN:
+            case LOOP:
+                // a wind-up turn's highest g; a loop's pull-out at the bottom, its last stretch of high g
                 return lastAboveNz(i0, ic);
             default:
                 return -1;

@@ -76,7 +76,7 @@ public final class BoundaryRules {
             case SIDESLIP:
                 return List.of(BEGIN_DEPARTURE, END_RECOVERY, PHYSICS_ENTRY);
             case LOOP:
-                return List.of(BEGIN_DEPARTURE, PHYSICS_ENTRY);
+                return List.of(BEGIN_DEPARTURE, END_RECOVERY, PHYSICS_ENTRY);
             case PITCH_DOUBLET:
                 return List.of(DOUBLET_SIGNATURE, PHYSICS_ENTRY);
             case PHUGOID:

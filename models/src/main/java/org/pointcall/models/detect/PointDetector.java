@@ -1205,6 +1205,11 @@ public final class PointDetector implements Detector {
                 e = physicalEnd(k, now);
                 endEstimateNs = keep;
             }
+            if (e == NONE && recovers[k] && !accelerates[k] && !holds[k]) {
+                // no steady flight held for the whole dwell (the pilot went on to the next point first): the end
+                // of the longest steady stretch after the core
+                e = refiner.settledRecoveryEnd(kind, beginNs, end + CORE_AFTER_END_NS, now);
+            }
             if (e != NONE && capNs != NONE) {
                 e = Math.min(e, capNs);
             }

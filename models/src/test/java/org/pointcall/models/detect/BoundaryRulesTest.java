@@ -512,4 +512,42 @@ class BoundaryRulesTest {
         assertTrue(SyntheticSortie.withHolds(DetectorSettings.defaults())
                 .run(30, new Probabilities(7L, 0.05, 0.01), shortHold).finish().events.isEmpty());
     }
+
+    /** Level until 10 s, a 4 g loop at 36 deg/s of pitch rate to 20 s, level after (a pilot cut short: a turn). */
+    private static Physics loopThenLevel(double turnAtS) {
+        return (t, f, x) -> {
+            SyntheticSortie.level(t, f, x);
+            if (t >= 10 && t < 20) {
+                double g = 2 * Math.PI * (t - 10) / 10;
+                boolean inverted = g > Math.PI / 2 && g < 1.5 * Math.PI;
+                double pitch = g <= Math.PI / 2 ? g : inverted ? Math.PI - g : g - 2 * Math.PI;
+                x.set(f, "Pitch", Math.toDegrees(pitch));
+                x.set(f, "Roll", inverted ? 180.0 : 0.0);
+                x.set(f, "Heading", inverted ? 270.0 : 90.0);
+                x.set(f, "Q", 36.0);
+                x.set(f, "Nz", 1.0 + 3.0 * Math.sin(Math.min(g, Math.PI)) + (g > Math.PI ? 3.0 : 0.0));
+                x.set(f, "Hp", 10000.0 + 1500.0 * (1 - Math.cos(g)));
+            } else if (t >= turnAtS) {
+                x.set(f, "Roll", Math.min(45.0, 15.0 * (t - turnAtS)));
+                x.set(f, "P", t < turnAtS + 3 ? 15.0 : 0.0);
+            }
+        };
+    }
+
+    @Test
+    void aLoopEndsBackInSteadyFlightNotWhereTheClassifierLetsGo() {
+        // the classifier lets go 5 s after the loop (its windows still hold it); steady level flight from 20 s
+        Bump late = new Bump(ManoeuvreKind.LOOP, 10, 25, 0.9);
+        PointEvent kept = run(DetectorSettings.defaults(), 60, loopThenLevel(1e9), late).onlyFinal();
+        assertEquals(ENDED, kept.type(), kept.evidence()::toString);
+        assertEquals(ManoeuvreKind.LOOP, kept.kind());
+        // (the flight-path angle is a least-squares slope of Hp: it reads level a little after the loop)
+        assertEquals(22.0, s(kept.endNs()), 0.8, "2 s of steady flight after the loop: " + kept.evidence());
+        // the pilot rolls into a turn 1.2 s after the loop: it ends where that steady second ended
+        PointEvent cut = run(DetectorSettings.defaults(), 60, loopThenLevel(21.2), late).onlyFinal();
+        assertEquals(21.2, s(cut.endNs()), 0.8, cut.evidence()::toString);
+        // without end-recovery, the classifier's end stays
+        PointEvent off = run(without(BoundaryRules.END_RECOVERY), 60, loopThenLevel(1e9), late).onlyFinal();
+        assertTrue(s(off.endNs()) > 24, off.evidence()::toString);
+    }
 }
