@@ -141,6 +141,21 @@ public final class DemoCommand implements Callable<Integer> {
             Thread sim = simulator(live.rig().port(), dict, card, err, stop);
             sim.start();
             if (window) {
+                // the simulated sortie has an end, unlike live telemetry: once it is over the session is ended, so
+                // the point being flown is judged on the screen as in the headless monitor
+                Thread ender = new Thread(() -> {
+                    try {
+                        sim.join();
+                        if (!stop.get()) {
+                            Thread.sleep(200); // the last datagrams through the pipeline
+                            live.endStream();
+                        }
+                    } catch (InterruptedException e) {
+                        Thread.currentThread().interrupt();
+                    }
+                }, "demo-end");
+                ender.setDaemon(true);
+                ender.start();
                 ConsoleSetup setup = new ConsoleSetup("pointcall demo \u2014 " + card.sortie(), live.link(),
                         live.traces(), settings, settingsPath, false, ConsoleSetup.DEFAULT_REDRAW_HZ,
                         TraceDrawing.ENVELOPE);

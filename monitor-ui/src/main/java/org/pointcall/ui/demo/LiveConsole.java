@@ -166,12 +166,26 @@ public final class LiveConsole implements AutoCloseable {
             return;
         }
         closed = true;
+        endStream();
+        publisher.publishOnce(System.nanoTime());
+        publisher.close();
+    }
+
+    private boolean ended;
+
+    /**
+     * The stream is over (a simulated sortie has an end): stops receiving, drains the pipeline and ends the session,
+     * while the screen goes on being published (it shows the last point judged and the data gone). Once.
+     */
+    public synchronized void endStream() {
+        if (ended) {
+            return;
+        }
+        ended = true;
         rig.close();
         CardSession s = session;
         if (s != null) {
             s.finish();
         }
-        publisher.publishOnce(System.nanoTime());
-        publisher.close();
     }
 }
