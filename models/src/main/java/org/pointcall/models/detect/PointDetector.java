@@ -1144,6 +1144,8 @@ public final class PointDetector implements Detector {
         }
         phase = IDLE;
         pointClass = -1;
+        // whatever closed it (a roll found, the stream's end), a hold closed is no longer followed
+        physicsHold = false;
         candidateNs[k] = edge[k].riseNs();
         restart(k, candidateNs[k]);
     }

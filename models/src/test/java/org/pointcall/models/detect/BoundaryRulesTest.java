@@ -550,4 +550,19 @@ class BoundaryRulesTest {
         PointEvent off = run(without(BoundaryRules.END_RECOVERY), 60, loopThenLevel(1e9), late).onlyFinal();
         assertTrue(s(off.endNs()) > 24, off.evidence()::toString);
     }
+
+    @Test
+    void aRollOutOfALongSteadySetUpEndsTheHoldAndIsAPointOfItsOwn() {
+        // 30 s of steady level flight (a hold by the signature from 15 s on), then the pull and the full roll of
+        // roll() 20 s later; the classifier sees nothing
+        Physics later = (t, f, x) -> roll().fill(t - 20, f, x);
+        SyntheticSortie s = SyntheticSortie.withHolds(DetectorSettings.defaults())
+                .run(60, new Probabilities(7L, 0.05, 0.01), later).finish();
+        assertWellFormed(s.events);
+        List<PointEvent> kept = s.ofType(ENDED);
+        assertEquals(List.of(ManoeuvreKind.STABILISED, ManoeuvreKind.AILERON_ROLL, ManoeuvreKind.STABILISED),
+                kept.stream().map(PointEvent::kind).toList(), s.events::toString);
+        assertTrue(kept.get(0).endNs() / 1e9 <= 32.5, "the hold ends by the roll: " + kept.get(0));
+        assertEquals(30.0, s(kept.get(1).beginNs()), 0.5, kept.get(1).evidence()::toString);
+    }
 }
