@@ -887,7 +887,6 @@ public final class PointDetector implements Detector {
         for (GuardRule r : rules[c]) {
             r.mark();
         }
-        physicsHold = false;
         close(now, end, "ended by " + BoundaryRules.HOLD_SIGNATURE + ": " + how, NONE);
         holdWatch.reset();
         if (j >= 0 && j != c) {
@@ -1249,7 +1248,6 @@ public final class PointDetector implements Detector {
             for (GuardRule r : rules[pointClass]) {
                 r.mark();
             }
-            physicsHold = false;
             long e = holdWatch.holding() && holdWatch.steadySinceNs() == holdRunNs ? holdWatch.lastSteadyNs()
                     : holdWatch.endedRunNs() != NONE ? holdWatch.endedRunNs() : now;
             physicalEndNs = e;
