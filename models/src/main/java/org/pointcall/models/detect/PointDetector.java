@@ -723,6 +723,23 @@ public final class PointDetector implements Detector {
         emit(PointEvent.Type.BEGUN, now, NONE, List.of(), ev, liveConfidence(c));
     }
 
+    /**
+     * Opens a point of class {@code c} that a physics signature found, from {@code b}, begun at {@code now}: its
+     * begin is the classifier's as far as the rules go; with {@code seeAgain} its rules are given every kept frame
+     * from {@code b} on (what the signature found is already behind us).
+     */
+    private void openPhysics(int c, long b, long now, boolean seeAgain) {
+        classifierBeginNs = b;
+        pointAssisted = false;
+        restart(c, b);
+        if (seeAgain) {
+            for (GuardRule rule : rules[c]) {
+                lookBack(rule, b);
+            }
+        }
+        open(c, b, now);
+    }
+
     /** A new open point of class {@code c} from {@code b}, begun at {@code now}: the per-point state reset. */
     private void open(int c, long b, long now) {
         pointId++;
@@ -748,10 +765,7 @@ public final class PointDetector implements Detector {
         if (lastEndNs != NONE) {
             b = Math.max(b, lastEndNs);
         }
-        classifierBeginNs = b;
-        pointAssisted = false;
-        restart(c, b);
-        open(c, b, now);
+        openPhysics(c, b, now, false);
         physicsPoint = true;
         physicsFailure = null;
         List<String> ev = new ArrayList<>();
@@ -797,14 +811,8 @@ public final class PointDetector implements Detector {
         if (lastEndNs != NONE) {
             b = Math.max(b, lastEndNs);
         }
-        classifierBeginNs = b;
-        pointAssisted = false;
-        restart(c, b);
         // the rules judge the roll itself, which is already behind us
-        for (GuardRule rule : rules[c]) {
-            lookBack(rule, b);
-        }
-        open(c, b, now);
+        openPhysics(c, b, now, true);
         physicsRoll = true;
         lastEndCheckNs = NONE;
         endEstimateNs = rolls.endNs();
@@ -856,13 +864,7 @@ public final class PointDetector implements Detector {
      */
     private void beginPhysicsHold(long now, long b) {
         int c = holdClass;
-        classifierBeginNs = b;
-        pointAssisted = false;
-        restart(c, b);
-        for (GuardRule rule : rules[c]) {
-            lookBack(rule, b);
-        }
-        open(c, b, now);
+        openPhysics(c, b, now, true);
         physicsHold = true;
         holdRunNs = holdWatch.steadySinceNs();
         emit(PointEvent.Type.BEGUN, now, NONE, List.of(), List.of("entered: " + BoundaryRules.HOLD_SIGNATURE + ": "

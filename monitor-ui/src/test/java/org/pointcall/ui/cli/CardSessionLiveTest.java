@@ -231,13 +231,7 @@ class CardSessionLiveTest {
         org.pointcall.ingest.sim.truth.SortieTruth truth = new SortieSimulator(Airframes.load("sparrel-a1"), card,
                 DICT, 31, 64, SensorSettings.DEFAULT, PilotSettings.NO_FLAWS).run(List.of(f -> frames.add(f.copy())));
         org.pointcall.ingest.sim.truth.PointTruth tp = truth.points().get(0);
-        List<SessionEvent> events = new ArrayList<>();
-        CardSession s = new CardSession(SessionSetup.of(DICT, card, model.model(), model.metadata().description(),
-                CardAnalysers.standard()), events::add);
-        frames.forEach(s::onFrame);
-        s.finish();
-        PointOutcome o = s.outcomes().stream().filter(x -> "TP-2".equals(x.cardId())).findFirst().orElseThrow(
-                () -> new AssertionError("TP-2 not flown: " + s.outcomes()));
+        PointOutcome o = flightOf("TP-2", flown(card, frames));
         assertTrue(o.detection() >= CardSession.CONDITION_IDS, "flown from its condition, not the classifier: " + o);
         assertEquals(tp.inBands() ? Verdict.GOOD : Verdict.REPEAT, o.verdict(), o.reasons()::toString);
         // the flight covers the pilot's hold: on condition from before it began (here from the start of the sortie,
@@ -246,21 +240,13 @@ class CardSessionLiveTest {
                 o.beginNs() / 1e9 + " s against the true " + tp.beginS());
         assertTrue(o.endNs() / 1e9 >= tp.endS() - 0.5, o.endNs() / 1e9 + " s against the true " + tp.endS());
 
-        CardSession off = new CardSession(SessionSetup.of(DICT, sparrelHold(0.30), model.model(),
-                model.metadata().description(), CardAnalysers.standard()), e -> { });
-        frames.forEach(off::onFrame);
-        off.finish();
+        CardSession off = flown(sparrelHold(0.30), frames);
         assertTrue(off.outcomes().stream().noneMatch(x -> x.detection() >= CardSession.CONDITION_IDS),
                 off.outcomes()::toString);
 
         // the same hold against a card point at Mach 0.255 +/- 0.005: held steady one band width below it for the
         // hold, never on it, it is a flight of the point to repeat, with Mach as the reason (not nothing)
-        CardSession slow = new CardSession(SessionSetup.of(DICT, sparrelHold(0.255), model.model(),
-                model.metadata().description(), CardAnalysers.standard()), e -> { });
-        frames.forEach(slow::onFrame);
-        slow.finish();
-        PointOutcome os = slow.outcomes().stream().filter(x -> "TP-2".equals(x.cardId())).findFirst().orElseThrow(
-                () -> new AssertionError("the off-condition hold is not a flight of TP-2: " + slow.outcomes()));
+        PointOutcome os = flightOf("TP-2", flown(sparrelHold(0.255), frames));
         assertTrue(os.detection() >= CardSession.CONDITION_IDS, os::toString);
         assertEquals(Verdict.REPEAT, os.verdict());
         assertTrue(os.reasons().get(0).text().startsWith("Mach held inside 0.255 +/- 0.005"),
@@ -272,15 +258,26 @@ class CardSessionLiveTest {
         // hold on the second one's condition is still seen, and bound to it
         TestCard two = CardFiles.parse(String.join("\n", "sortie: T-10", "airframe: sparrel-a1", "points:",
                 holdPoint("TP-0", 0.30), holdPoint("TP-2", 0.24)), "two.yaml", DICT);
-        CardSession second = new CardSession(SessionSetup.of(DICT, two, model.model(),
-                model.metadata().description(), CardAnalysers.standard()), e -> { });
-        frames.forEach(second::onFrame);
-        second.finish();
-        PointOutcome o2 = second.outcomes().stream().filter(x -> "TP-2".equals(x.cardId())).findFirst().orElseThrow(
-                () -> new AssertionError("TP-2 not flown: " + second.outcomes()));
+        CardSession second = flown(two, frames);
+        PointOutcome o2 = flightOf("TP-2", second);
         assertTrue(o2.detection() >= CardSession.CONDITION_IDS, o2::toString);
         assertEquals(o.verdict(), o2.verdict(), o2.reasons()::toString);
         assertEquals(List.of("TP-0"), second.notFlown());
+    }
+
+    /** A card session of {@code card} that played {@code frames} to their end. */
+    private static CardSession flown(TestCard card, List<Frame> frames) {
+        CardSession s = new CardSession(SessionSetup.of(DICT, card, model.model(), model.metadata().description(),
+                CardAnalysers.standard()), e -> { });
+        frames.forEach(s::onFrame);
+        s.finish();
+        return s;
+    }
+
+    /** The first flight of card point {@code id} in the session's outcomes. */
+    private static PointOutcome flightOf(String id, CardSession s) {
+        return s.outcomes().stream().filter(x -> id.equals(x.cardId())).findFirst().orElseThrow(
+                () -> new AssertionError(id + " not flown: " + s.outcomes()));
     }
 
     @Test
