@@ -147,6 +147,28 @@ public final class CardSession {
     private static final String ENDED_BY_FINISH = "ended by finish";
     /** The evidence line of a point flown from its condition. */
     public static final String CONDITION_EVIDENCE = "on condition:";
+    /**
+     * Ids of points begun from their departure from the card point's entry ({@link OnsetWatch}) start here, above
+     * the condition points'. Such a point keeps its id when the detector's detection of it is taken in.
+     */
+    public static final long ONSET_IDS = 2_000_000_000L;
+    /** The evidence line of a point begun from its departure. */
+    public static final String ONSET_EVIDENCE = "departed from the entry:";
+    /** A begin from the departure not confirmed by a detection within this is withdrawn, ns. */
+    static final long CONFIRM_NS = 30_000_000_000L;
+    /** ... or once the flight has been quiet again, back at the armed values, this long, ns (it was a set-up). */
+    static final long SETTLED_NS = 3_000_000_000L;
+    private final OnsetWatch onset = new OnsetWatch();
+    private final boolean onsetOn;
+    /** Id of the open point begun from its departure, or 0. */
+    private long onsetPoint;
+    private long onsets;
+    /** The detector's id of the detection taken into the open onset point, or 0 while it waits for one. */
+    private long adopted;
+    /** A detection of another kind begun while the onset point waits: held until it is told (ended or discarded). */
+    private PointEvent foreign;
+    private long settledSinceNs = Long.MIN_VALUE;
+    private int onsetsWithdrawn;
     private long currentFrameNs;
     private boolean pending;
     private long pendingNs;
@@ -174,6 +196,7 @@ public final class CardSession {
         this.dictionary = setup.dictionary();
         this.card = setup.card();
         this.matcher = card == null ? null : new CardMatcher(card);
+        this.onsetOn = setup.detectorSettings().ruleEnabled(org.pointcall.models.detect.BoundaryRules.CARD_ONSET);
         this.classifier = setup.classifier().copy();
         if (!classifier.featureNames().equals(setup.model().features())) {
             throw new IllegalArgumentException("the classifier's features are not the model description's");
@@ -261,6 +284,7 @@ public final class CardSession {
             releaseHeldEnd();
         }
         watchCondition(t);
+        watchOnset(t);
         if (lastTrimNs == Long.MIN_VALUE || t - lastTrimNs > 5_000_000_000L) {
             lastTrimNs = t;
             long keep = (active == null ? t : Math.min(t, active.beginNs)) - prerollNs;
@@ -279,6 +303,9 @@ public final class CardSession {
         long t = frames == 0 ? 0 : lastFrameNs;
         applyCommands(t);
         if (frames > 0) {
+            if (onsetPoint != 0 && adopted == 0) {
+                withdrawOnset(lastFrameNs, "the stream ended before a detection confirmed it");
+            }
             if (conditionPoint != 0) {
                 endCondition(lastFrameNs, condition.lastOnNs(), ENDED_BY_FINISH);
             }
@@ -395,6 +422,147 @@ public final class CardSession {
         }
     }
 
+    /**
+     * The card's next point begun live from its departure from its entry ({@link OnsetWatch}): when nothing is being
+     * flown, the next point (not a stabilised one: {@link #watchCondition}) is watched; armed on its steady entry, its
+     * first move of the kind begins it, bound to that card point, at once. The detector's detection of it (its first
+     * begun of the same kind, stalls of either kind alike) is then taken in, keeping the point's id: the flight's
+     * begin, end and analysis are the detector's as before, only known to have begun seconds sooner. A detection of
+     * another kind meanwhile is held until it is told: discarded, it is dropped; ended, the begin is withdrawn and the
+     * detection is flown as it would have been. Unconfirmed for {@link #CONFIRM_NS}, or quiet again at the armed
+     * values for {@link #SETTLED_NS} (a set-up, not the point), the begin is withdrawn
+     * ({@link SessionEvent.PointWithdrawn}) and the card point waits as before.
+     */
+    private void watchOnset(long t) {
+        if (matcher == null || finishing || !onsetOn) {
+            return;
+        }
+        if (onsetPoint != 0) {
+            onset.update(onset.point(), detector.state(), history, t);
+            if (adopted != 0 || foreign != null) {
+                return;
+            }
+            if (onset.settledAgain(t)) {
+                if (settledSinceNs == Long.MIN_VALUE) {
+                    settledSinceNs = t;
+                }
+            } else {
+                settledSinceNs = Long.MIN_VALUE;
+            }
+            if (settledSinceNs != Long.MIN_VALUE && t - settledSinceNs >= SETTLED_NS) {
+                withdrawOnset(t, String.format(java.util.Locale.ROOT, "steady again at the entry for %.0f s, no %s"
+                        + " found", SETTLED_NS / 1e9, active.kind.key()));
+            } else if (t - onset.departedNs() >= CONFIRM_NS) {
+                withdrawOnset(t, String.format(java.util.Locale.ROOT, "no %s found within %.0f s",
+                        active.kind.key(), CONFIRM_NS / 1e9));
+            }
+            return;
+        }
+        TestPoint next = active != null || heldEnd != null || conditionPoint != 0 ? null
+                : matcher.next().filter(p -> OnsetWatch.watches(p.kind())).orElse(null);
+        onset.update(next, detector.state(), history, t);
+        if (next == null || !onset.departed()) {
+            return;
+        }
+        onsetPoint = ONSET_IDS + ++onsets;
+        adopted = 0;
+        foreign = null;
+        settledSinceNs = Long.MIN_VALUE;
+        PointEvent e = new PointEvent(PointEvent.Type.BEGUN, onsetPoint, next.kind(), onset.departureBeginNs(),
+                PointEvent.UNKNOWN_NS, t, t, 1.0, List.of(), List.of(String.format(java.util.Locale.ROOT,
+                "%s %s after %.1f s steady on %s's entry: %s", ONSET_EVIDENCE, next.kind().key(),
+                (onset.departureBeginNs() - onset.armedNs()) / 1e9 + OnsetWatch.ARM_NS / 1e9, next.id(),
+                onset.cue())));
+        Optional<TestPoint> bound = matcher.bind(next.kind(), q -> q == next);
+        active = new Active(e, bound.orElse(null));
+        emit(new SessionEvent.PointStarted(t, e.pointId(), e.kind().key(), active.cardId(), active.title(),
+                e.beginNs()));
+    }
+
+    /** The open onset point was not the point after all: unbound, forgotten, told. */
+    private void withdrawOnset(long t, String why) {
+        Active a = active;
+        active = null;
+        onsetPoint = 0;
+        adopted = 0;
+        settledSinceNs = Long.MIN_VALUE;
+        onset.reset();
+        onsetsWithdrawn++;
+        if (a == null) {
+            return;
+        }
+        if (a.point != null) {
+            matcher.unbind(a.point.id());
+        }
+        notice((a.point == null ? a.kind.key() : a.point.id()) + " begin withdrawn: " + why);
+        emit(new SessionEvent.PointWithdrawn(t, a.detection, a.cardId(), why));
+    }
+
+    /** Stalls level or turning are one family: the detector tells which only at the break. */
+    private static boolean sameFamily(ManoeuvreKind a, ManoeuvreKind b) {
+        return a == b || isStall(a) && isStall(b);
+    }
+
+    private static boolean isStall(ManoeuvreKind k) {
+        return k == ManoeuvreKind.STALL_LEVEL || k == ManoeuvreKind.STALL_TURN;
+    }
+
+    private static PointEvent rekey(PointEvent e, long id) {
+        return new PointEvent(e.type(), id, e.kind(), e.beginNs(), e.endNs(), e.reportedAtNs(), e.begunAtNs(),
+                e.confidence(), e.keyInstants(), e.evidence());
+    }
+
+    /**
+     * A detector event while an onset point is open: taken in, held, or let through (then re-keyed when it is the
+     * detection taken in). Returns the event to handle as usual, or null when it was dealt with here.
+     */
+    private PointEvent throughOnset(PointEvent e) {
+        if (adopted != 0) {
+            return e.pointId() == adopted ? rekey(e, onsetPoint) : e;
+        }
+        if (foreign != null && e.pointId() == foreign.pointId()) {
+            switch (e.type()) {
+                case REFINED -> {
+                    if (sameFamily(e.kind(), active.kind)) {
+                        foreign = null;
+                        adopted = e.pointId();
+                        active.take(e);
+                    } else {
+                        foreign = new PointEvent(PointEvent.Type.BEGUN, e.pointId(), e.kind(), e.beginNs(), e.endNs(),
+                                foreign.reportedAtNs(), foreign.begunAtNs(), e.confidence(), e.keyInstants(),
+                                e.evidence());
+                    }
+                }
+                case DISCARDED -> {
+                    foreign = null;
+                    discardedUnbound++;
+                }
+                case ENDED -> {
+                    PointEvent b = foreign;
+                    foreign = null;
+                    withdrawOnset(e.reportedAtNs(), "a " + e.kind().key() + " was found instead");
+                    onPointEvent(b);
+                    return e;
+                }
+                case BEGUN -> {
+                }
+            }
+            return null;
+        }
+        if (e.type() == PointEvent.Type.BEGUN && sameFamily(e.kind(), active.kind)) {
+            adopted = e.pointId();
+            active.take(e);
+            return null;
+        }
+        if (e.type() == PointEvent.Type.BEGUN && foreign == null) {
+            foreign = e;
+            return null;
+        }
+        // the detector told something of a point the onset point cannot be: it was not the card's point
+        withdrawOnset(e.reportedAtNs(), "a " + e.kind().key() + " was found instead");
+        return e;
+    }
+
     /** Forgets the condition of every watch from index {@code from} on. */
     private void resetWatches(int from) {
         for (int k = from; k < watches.size(); k++) {
@@ -458,6 +626,12 @@ public final class CardSession {
         if (e.pointId() < CONDITION_IDS) {
             if (swallowed.contains(e.pointId())) {
                 return;
+            }
+            if (onsetPoint != 0) {
+                e = throughOnset(e);
+                if (e == null) {
+                    return;
+                }
             }
             if (e.type() == PointEvent.Type.BEGUN && e.kind() == ManoeuvreKind.STABILISED
                     && (conditionPoint != 0 || e.beginNs() < conditionEndNs)) {
@@ -535,6 +709,11 @@ public final class CardSession {
     private void close(PointEvent e) {
         Active a = active;
         active = null;
+        if (onsetPoint != 0 && e.pointId() == onsetPoint) {
+            onsetPoint = 0;
+            adopted = 0;
+            onset.reset();
+        }
         if (a == null || a.detection != e.pointId()) {
             a = new Active(e, matcher == null ? null : matcher.bind(e.kind()).orElse(null));
         } else if (a.kind != e.kind()) {

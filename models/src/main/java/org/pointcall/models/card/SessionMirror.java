@@ -119,6 +119,16 @@ public final class SessionMirror {
             }
         } else if (e instanceof SessionEvent.CallTaken c) {
             call(c);
+        } else if (e instanceof SessionEvent.PointWithdrawn w) {
+            if (active != null && active.detection == w.detection()) {
+                if (active.cardId != null) {
+                    int i = index(active.cardId);
+                    if (states[i] == CardPointState.FLYING) {
+                        states[i] = before[i];
+                    }
+                }
+                active = null;
+            }
         }
         events++;
         lastEventNs = Math.max(lastEventNs, e.timeNs());

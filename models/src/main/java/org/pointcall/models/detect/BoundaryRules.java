@@ -54,11 +54,17 @@ public final class BoundaryRules {
     public static final String HOLD_SIGNATURE = "hold-signature";
     /** Long points (level acceleration, phugoid, stabilised) bridge longer gaps of their own kind. */
     public static final String FRAGMENT_MERGE = "fragment-merge";
+    /**
+     * With a test card, the card session shows the card's next point begun from its first move off its steady entry
+     * ({@code OnsetWatch} in {@code models.card}), before the detector can tell the kind; off, a point is shown begun
+     * when the detector begins it. The detector itself does not read it.
+     */
+    public static final String CARD_ONSET = "card-onset";
 
     /** Every boundary rule name, in documentation order. */
     public static final List<String> NAMES = List.of(BEGIN_DEPARTURE, END_RECOVERY, ACCEL_EXTENT, ACCEL_GAIN,
-            ACCEL_LEVEL, ACCEL_SETTLED_ENTRY, DOUBLET_SIGNATURE, FRAGMENT_MERGE, HOLD_SIGNATURE, PHYSICS_ENTRY,
-            ROLL_SIGNATURE, STABILISED_EXTENT, STALL_BANK);
+            ACCEL_LEVEL, ACCEL_SETTLED_ENTRY, CARD_ONSET, DOUBLET_SIGNATURE, FRAGMENT_MERGE, HOLD_SIGNATURE,
+            PHYSICS_ENTRY, ROLL_SIGNATURE, STABILISED_EXTENT, STALL_BANK);
 
     private BoundaryRules() {
     }

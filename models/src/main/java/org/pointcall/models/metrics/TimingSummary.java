@@ -11,7 +11,7 @@ package org.pointcall.models.metrics;
  * @param absP95S    95th percentile of the absolute value
  */
 public record TimingSummary(int count, double medianS, double p95S, double absMedianS, double absP95S) {
-    static TimingSummary of(double[] valuesS) {
+    public static TimingSummary of(double[] valuesS) {
         double[] abs = new double[valuesS.length];
         for (int i = 0; i < abs.length; i++) {
             abs[i] = Math.abs(valuesS[i]);

@@ -72,6 +72,10 @@ public final class EvaluateCommand implements Callable<Integer> {
     @Option(names = "--card", paramLabel = "CARD", description = "with --verdicts: card (default: each sortie's)")
     Path cardFile;
 
+    @Option(names = "--without", arity = "1..*", paramLabel = "RULE",
+            description = "with --verdicts: switch these detector and session rules off, for comparison")
+    List<String> without = new ArrayList<>();
+
     @Spec
     CommandSpec spec;
 
@@ -79,7 +83,7 @@ public final class EvaluateCommand implements Callable<Integer> {
     public Integer call() {
         PrintWriter w = spec.commandLine().getOut();
         if (verdicts) {
-            VerdictCheck.run(w, modelFile, cardFile, dictionaryFile, data);
+            VerdictCheck.run(w, modelFile, cardFile, dictionaryFile, data, without);
             return 0;
         }
         if (analysis) {

@@ -148,6 +148,14 @@ public final class SessionDesk implements DeskModel, SessionListener {
             notes.put(c.call().cardId(), c.call().note());
         } else if (e instanceof SessionEvent.PointArmed) {
             kind = LogEntry.Kind.CALL;
+        } else if (e instanceof SessionEvent.PointWithdrawn w) {
+            Integer open = openSpans.remove(w.detection());
+            if (open != null && open == spans.size() - 1 && spans.get(open).open()) {
+                spans.remove((int) open);
+            } else if (open != null && spans.get(open).open()) {
+                PointSpan s = spans.get(open);
+                spans.set(open, new PointSpan(s.pointId(), s.beginS(), s.beginS()));
+            }
         }
         String line = stripStamp(e.line());
         // the log shows its own tag: drop the session line's first word where it only repeats it

@@ -225,6 +225,7 @@ class ConsoleViewTest {
     @Test
     void sessionEventsHaveTheirOwnTypes() {
         // guards the adapter's mapping: a new event type of the session must be placed in the log deliberately
-        assertEquals(7, SessionEvent.class.getPermittedSubclasses().length);
+        // (a withdrawn begin is a POINT line, and its span leaves the time line: SessionDesk)
+        assertEquals(8, SessionEvent.class.getPermittedSubclasses().length);
     }
 }

@@ -9,7 +9,7 @@ import com.fasterxml.jackson.annotation.JsonTypeInfo;
 /**
  * Something a card session reports, on data time, in the order it happened: a point begun, a band's status
  * changed, a point finished (with its verdict), an unplanned manoeuvre, a safety limit broken or cleared, a point
- * armed, an engineer's call. Immutable; stored as JSON records (the {@code event} property names the type).
+ * armed, an engineer's call, a begin flagged from the card that was withdrawn. Immutable; stored as JSON records (the {@code event} property names the type).
  */
 @JsonTypeInfo(use = JsonTypeInfo.Id.NAME, property = "event")
 @JsonSubTypes({
@@ -19,6 +19,7 @@ import com.fasterxml.jackson.annotation.JsonTypeInfo;
     @JsonSubTypes.Type(value = SessionEvent.Unplanned.class, name = "unplanned"),
     @JsonSubTypes.Type(value = SessionEvent.AlarmChanged.class, name = "alarm"),
     @JsonSubTypes.Type(value = SessionEvent.PointArmed.class, name = "armed"),
+    @JsonSubTypes.Type(value = SessionEvent.PointWithdrawn.class, name = "point-withdrawn"),
     @JsonSubTypes.Type(value = SessionEvent.CallTaken.class, name = "call")
 })
 public sealed interface SessionEvent {
@@ -114,6 +115,22 @@ public sealed interface SessionEvent {
         @Override
         public String line() {
             return stamp(timeNs) + "armed  " + cardId;
+        }
+    }
+
+    /**
+     * A point begun live from its departure from the card point's entry ({@link PointStarted} with that
+     * {@code detection}) that the detector never confirmed: it was not a flight, and the card point waits as before.
+     */
+    record PointWithdrawn(long timeNs, long detection, String cardId, String why) implements SessionEvent {
+        public PointWithdrawn {
+            Objects.requireNonNull(why, "why");
+        }
+
+        @Override
+        public String line() {
+            return stamp(timeNs) + "undo   " + (cardId == null ? "(no card point)" : cardId) + " begin withdrawn: "
+                    + why;
         }
     }
 
