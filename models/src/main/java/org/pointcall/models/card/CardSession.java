@@ -395,8 +395,8 @@ public final class CardSession {
             long holdNs = Math.round(p.holdS() * 1e9);
             // a point out of the card's order is taken once held for its hold: on its condition for a few seconds
             // while setting up for the next point (a sideslip at the same speed and height) is not a flight of it
-            if (on == null && w.onForNs(t) >= (p == next ? ON_CONDITION_BEGIN_NS
-                    : Math.max(ON_CONDITION_BEGIN_NS, holdNs))) {
+            if (on == null && (p == next ? stabilisedOn(w, t) || w.onForNs(t) >= holdNs
+                    : w.onForNs(t) >= Math.max(ON_CONDITION_BEGIN_NS, holdNs))) {
                 on = w;
             }
             if (off == null && p == next && n.onForNs(t) >= holdNs
@@ -458,12 +458,15 @@ public final class CardSession {
             }
             return;
         }
-        TestPoint next = active != null || heldEnd != null || conditionPoint != 0 ? null
+        // a point that has ended and waits for its post-roll is over: the next one may start meanwhile
+        boolean over = active == null || heldEnd != null && active.detection == heldEnd.pointId();
+        TestPoint next = !over || conditionPoint != 0 ? null
                 : matcher.next().filter(p -> OnsetWatch.watches(p.kind())).orElse(null);
         onset.update(next, detector.state(), history, t);
         if (next == null || !onset.departed()) {
             return;
         }
+        releaseHeldEnd();
         onsetPoint = ONSET_IDS + ++onsets;
         adopted = 0;
         foreign = null;
@@ -563,6 +566,26 @@ public final class CardSession {
         return e;
     }
 
+    /**
+     * The card's next hold is begun once the aircraft is stabilised on its condition: every band inside and the
+     * flight steady ({@link PointDetector#steadySinceNs}, the steadiness {@code hold-signature} asks for) for
+     * {@link #STABILISED_ON_NS}, and on condition for at least {@link #ON_CONDITION_MIN_NS} (a pass through the
+     * condition in transit is neither). On condition but never that steady, it is begun once on condition for its
+     * whole hold.
+     */
+    private boolean stabilisedOn(ConditionWatch w, long t) {
+        long steady = detector.steadySinceNs();
+        if (steady == PointEvent.UNKNOWN_NS || w.onSinceNs() == ConditionWatch.NONE) {
+            return false;
+        }
+        return t - Math.max(steady, w.onSinceNs()) >= STABILISED_ON_NS && w.onForNs(t) >= ON_CONDITION_MIN_NS;
+    }
+
+    /** Steady on the condition this long, a hold is begun (common practice: stabilise, then mark), ns. */
+    static final long STABILISED_ON_NS = 2_000_000_000L;
+    /** ... and on condition at least this long, ns. */
+    static final long ON_CONDITION_MIN_NS = 2_000_000_000L;
+
     /** Forgets the condition of every watch from index {@code from} on. */
     private void resetWatches(int from) {
         for (int k = from; k < watches.size(); k++) {
@@ -631,6 +654,13 @@ public final class CardSession {
                 e = throughOnset(e);
                 if (e == null) {
                     return;
+                }
+                if (e.pointId() == onsetPoint && (e.type() == PointEvent.Type.ENDED
+                        || e.type() == PointEvent.Type.DISCARDED)) {
+                    // the onset point's flight is told: the watch goes on to the point after it
+                    onsetPoint = 0;
+                    adopted = 0;
+                    onset.reset();
                 }
             }
             if (e.type() == PointEvent.Type.BEGUN && e.kind() == ManoeuvreKind.STABILISED
@@ -1063,6 +1093,9 @@ public final class CardSession {
         return Double.NaN;
     }
 
+    /** A live rate gauge waits for this much of the point (or its whole interval, if shorter), ns. */
+    static final long RATE_MIN_NS = 3_000_000_000L;
+
     /** A live gauge shows a parameter's newest sample up to this old (a parameter sampled at 0.5 Hz or more). */
     static final long LIVE_HOLD_NS = 2_000_000_000L;
 
@@ -1078,8 +1111,10 @@ public final class CardSession {
         BandStatus candidate = BandStatus.WAITING;
         int candidateTicks;
         double outsideS;
+        final long beginNs;
 
         LiveGauge(TestPoint point, int index, long beginNs) {
+            this.beginNs = beginNs;
             this.point = point;
             this.index = index;
             this.band = point.bands().get(index);
@@ -1102,9 +1137,14 @@ public final class CardSession {
             // judges it there; the detector's live marks come too early (a stall is confirmed on the first small
             // AoA peak of its entry), and stopping on them froze the gauges for the rest of the entry.
             if (band.phase() == BandPhase.RATE) {
-                // live: the rate over the last interval (the same early marks would freeze it); judged at the end
-                // over the interval before the analysed instant
-                valueSi = PhaseJudge.slope(history, p, nowNs - Math.round(band.overS() * 1e9), nowNs);
+                // live: the rate over the last interval since the point began (the same early marks would freeze
+                // it), once there are RATE_MIN_NS of it (the trimmed flight before the entry is not the entry);
+                // judged at the end over the interval before the analysed instant
+                long over = Math.round(band.overS() * 1e9);
+                if (nowNs - beginNs < Math.min(over, RATE_MIN_NS)) {
+                    return;
+                }
+                valueSi = PhaseJudge.slope(history, p, Math.max(beginNs, nowNs - over), nowNs);
             } else {
                 // the newest sample of the parameter: a slow one (a discrete at 4 Hz) is NaN in most frames, and
                 // the decision ticks may never fall on a frame that carries it

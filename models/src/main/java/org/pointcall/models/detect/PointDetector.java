@@ -1312,6 +1312,14 @@ public final class PointDetector implements Detector {
         return settings;
     }
 
+    /**
+     * Start of the current run of steady, unaccelerated, wings-level flight as {@code hold-signature} sees it
+     * ({@link HoldWatch}), or {@link PointEvent#UNKNOWN_NS} when the flight is not steady now.
+     */
+    public long steadySinceNs() {
+        return holdWatch.holding() ? holdWatch.steadySinceNs() : NONE;
+    }
+
     /** True while a point is open (begun, not yet ended or discarded). */
     public boolean pointOpen() {
         return phase != IDLE;
