@@ -488,8 +488,10 @@ public final class PointDetector implements Detector {
                 if (lastEndNs != NONE) {
                     b = Math.max(b, lastEndNs);
                 }
-                if (holdWatch.lastSteadyNs() - b >= holdMinNs) {
-                    beginPhysicsHold(now, b);
+                // a hold begins once the flight is stabilised, STABILISE_NS into the steady run (as the card
+                // session shows one begun), and lasts the stabilised minimum from there
+                if (holdWatch.lastSteadyNs() - b >= holdMinNs + STABILISE_NS) {
+                    beginPhysicsHold(now, b + STABILISE_NS);
                 }
             }
             return;
@@ -895,6 +897,12 @@ public final class PointDetector implements Detector {
             begin(j, now, top);
         }
     }
+
+    /**
+     * {@code hold-signature}: a stabilised point begins this far into its steady run, once the flight has been steady
+     * that long (common practice: stabilise, then mark; 2 s from memory), not at its first steady instant, ns.
+     */
+    public static final long STABILISE_NS = 2_000_000_000L;
 
     /** A roll's core (its highest rates) is looked for up to this long after the rate fell back. */
     private static final long ROLL_CORE_AFTER_NS = 500_000_000L;

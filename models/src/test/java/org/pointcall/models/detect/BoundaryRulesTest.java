@@ -492,7 +492,9 @@ class BoundaryRulesTest {
         PointEvent hold = s.onlyFinal();
         assertEquals(ManoeuvreKind.STABILISED, hold.kind());
         assertEquals(ENDED, hold.type());
-        assertTrue(hold.beginNs() / 1e9 < 5, "begun where the steady run began: " + hold);
+        // stabilised: 2 s into the steady run (which starts within the first 1.5 s of smoothing), not at its start
+        assertTrue(hold.beginNs() / 1e9 >= PointDetector.STABILISE_NS / 1e9 && hold.beginNs() / 1e9 < 5,
+                "begun once stabilised, 2 s into the steady run: " + hold);
         assertEquals(40.0, hold.endNs() / 1e9, 1.5, "ended where the climb began: " + hold);
         assertTrue(hold.hasEvidence("ended by " + BoundaryRules.HOLD_SIGNATURE + ": steady flight ended"),
                 hold.evidence()::toString);
