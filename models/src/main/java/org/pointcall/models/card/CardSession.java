@@ -169,6 +169,8 @@ public final class CardSession {
     private PointEvent foreign;
     private long settledSinceNs = Long.MIN_VALUE;
     private int onsetsWithdrawn;
+    /** What the open onset point was begun from, for the console while it waits for the detector. */
+    private String onsetNote;
     private long currentFrameNs;
     private boolean pending;
     private long pendingNs;
@@ -477,6 +479,8 @@ public final class CardSession {
                 (onset.departureBeginNs() - onset.armedNs()) / 1e9 + OnsetWatch.ARM_NS / 1e9, next.id(),
                 onset.cue())));
         Optional<TestPoint> bound = matcher.bind(next.kind(), q -> q == next);
+        onsetNote = String.format(java.util.Locale.ROOT, "not yet confirmed by the detector: begun from the card"
+                + " at %.1f s, %s", onset.departureBeginNs() / 1e9, onset.cue());
         active = new Active(e, bound.orElse(null));
         emit(new SessionEvent.PointStarted(t, e.pointId(), e.kind().key(), active.cardId(), active.title(),
                 e.beginNs()));
@@ -1035,7 +1039,8 @@ public final class CardSession {
                 gs.add(g.view());
             }
             ap = new SessionSnapshot.ActivePoint(active.detection, active.cardId(), active.kind.key(), active.title(),
-                    active.beginNs, gs);
+                    active.beginNs, gs, onsetPoint != 0 && active.detection == onsetPoint && adopted == 0
+                    ? onsetNote : null);
         }
         int from = Math.max(0, alarms.size() - RECENT_ALARMS);
         snapshot = new SessionSnapshot(nowNs, card == null ? "" : card.sortie(), views, ap,

@@ -55,6 +55,8 @@ public final class SessionMirror {
         List<SessionSnapshot.Gauge> gauges;
         /** True once a live view of this point replaced the gauges built from events. */
         boolean viewed;
+        /** The latest view's {@link SessionSnapshot.ActivePoint#awaiting}. */
+        String awaiting;
 
         Active(SessionEvent.PointStarted p, TestPoint point) {
             this.detection = p.detection();
@@ -235,6 +237,7 @@ public final class SessionMirror {
             return;
         }
         active.gauges = List.copyOf(view.gauges());
+        active.awaiting = view.awaiting();
         active.viewed = true;
     }
 
@@ -261,7 +264,7 @@ public final class SessionMirror {
                     : o.operatorCall().call(), o == null ? List.of() : o.reasons()));
         }
         SessionSnapshot.ActivePoint ap = active == null ? null : new SessionSnapshot.ActivePoint(active.detection,
-                active.cardId, active.kind, active.title, active.beginNs, active.gauges);
+                active.cardId, active.kind, active.title, active.beginNs, active.gauges, active.awaiting);
         int from = Math.max(0, alarms.size() - CardSession.RECENT_ALARMS);
         return new SessionSnapshot(Math.max(nowNs, lastEventNs == Long.MIN_VALUE ? nowNs : lastEventNs),
                 card.sortie(), views, ap, alarms.subList(from, alarms.size()), List.copyOf(broken.values()),

@@ -51,11 +51,19 @@ public record SessionSnapshot(long timeNs, String sortie, List<CardPointView> po
      *
      * @param cardId null when it matched no card point (unplanned) or there is no card
      * @param gauges one per band of the card point, in card order
+     * @param awaiting null once the detector has the point; while a point begun from the card's onset waits for the
+     *                 detector, what it was begun from ({@code CardSession.ONSET_EVIDENCE}), for the console
      */
     public record ActivePoint(long detection, String cardId, String kind, String title, long beginNs,
-                              List<Gauge> gauges) {
+                              List<Gauge> gauges, String awaiting) {
         public ActivePoint {
             gauges = List.copyOf(gauges);
+        }
+
+        /** A point the detector has. */
+        public ActivePoint(long detection, String cardId, String kind, String title, long beginNs,
+                           List<Gauge> gauges) {
+            this(detection, cardId, kind, title, beginNs, gauges, null);
         }
     }
 

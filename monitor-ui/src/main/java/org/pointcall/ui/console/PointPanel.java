@@ -97,11 +97,14 @@ final class PointPanel {
             }
             return;
         }
+        // the line under the title changes within a point: a begin from the card says so until the detector has it
+        if (!p.config().equals(config.getText())) {
+            config.setText(p.config());
+        }
         if (!p.pointId().equals(pointShown) || gaugeViews.size() != p.gauges().size()) {
             pointShown = p.pointId();
             id.setText(p.pointId());
             title.setText(p.title());
-            config.setText(p.config());
             gauges.getChildren().clear();
             gaugeViews.clear();
             int i = 0;

@@ -325,7 +325,12 @@ public final class SessionDesk implements DeskModel, SessionListener {
         double elapsed = Math.max(0, (snap.timeNs() - a.beginNs()) / 1e9);
         double hold = tp != null && tp.hasHold() ? tp.holdS() : 0;
         String id = label(a.cardId(), a.kind());
-        return new ActivePoint(id, a.title() == null ? a.kind() : a.title(), tp == null ? "" : tp.config(), elapsed,
+        String config = tp == null ? "" : tp.config();
+        if (a.awaiting() != null) {
+            // a begin from the card, not yet the detector's: the panel says so where the card's configuration goes
+            config = a.awaiting();
+        }
+        return new ActivePoint(id, a.title() == null ? a.kind() : a.title(), config, elapsed,
                 Math.max(0, elapsed - worstThroughoutOutS), hold, gauges, traceBands);
     }
 

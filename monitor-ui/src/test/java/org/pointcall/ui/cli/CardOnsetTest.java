@@ -132,6 +132,29 @@ class CardOnsetTest {
     }
 
     @Test
+    void aBeginFromTheCardSaysSoUntilTheDetectorHasIt() {
+        CardSession s = new CardSession(SessionSetup.of(DICT, FLOWN, model.model(), model.metadata().description(),
+                CardAnalysers.standard()), e -> { });
+        int awaiting = 0;
+        int confirmed = 0;
+        for (Frame f : FRAMES) {
+            s.onFrame(f);
+            var a = s.snapshot().active();
+            if (a != null && "SL-1".equals(a.cardId())) {
+                if (a.awaiting() != null) {
+                    assertEquals(0, confirmed, "once the detector has it, it stays the detector's");
+                    assertTrue(a.awaiting().startsWith("not yet confirmed by the detector"), a.awaiting());
+                    awaiting++;
+                } else {
+                    confirmed++;
+                }
+            }
+        }
+        s.finish();
+        assertTrue(awaiting > 0 && confirmed > 0, awaiting + " snapshots awaiting, " + confirmed + " confirmed");
+    }
+
+    @Test
     void aDepartureThatIsNotTheCardsNextPointIsWithdrawn() {
         // the card waits for a phugoid at the stall's altitude: the stall's slowing down is a phugoid's first move
         TestCard card = CardFiles.parse(String.join("\n", "sortie: T-11", "airframe: sparrel-a1", "points:",

@@ -35,4 +35,18 @@ class SessionDeskSpansTest {
         desk.onEvent(new SessionEvent.PointStarted(70 * S, 6, "loop", "LP-1", "Loop", 65 * S));
         assertEquals(2, desk.spans().size());
     }
+
+    @Test
+    void aWithdrawnBeginLeavesNoSpanAndTheNextPointDrawsItsOwn() {
+        SessionDesk desk = new SessionDesk(DemoFiles.card(), DemoFiles.dictionary());
+        desk.onEvent(new SessionEvent.PointStarted(12 * S, 2_000_000_001L, "phugoid", "PH-1", "Phugoid", 11 * S));
+        assertEquals(1, desk.spans().size());
+        desk.onEvent(new SessionEvent.PointWithdrawn(40 * S, 2_000_000_001L, "PH-1", "a stall-level was found instead"));
+        assertEquals(0, desk.spans().size(), desk.spans()::toString);
+        assertEquals(true, desk.events().stream().anyMatch(e -> e.text().contains("begin withdrawn")),
+                desk.events()::toString);
+        desk.onEvent(new SessionEvent.PointStarted(40 * S, 7, "stall-level", "SL-1", "Wings-level stall", 11 * S));
+        assertEquals(1, desk.spans().size());
+        assertEquals(11.0, desk.spans().get(0).beginS(), 1e-9);
+    }
 }
