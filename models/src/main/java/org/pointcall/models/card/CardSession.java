@@ -452,8 +452,12 @@ public final class CardSession {
                 settledSinceNs = Long.MIN_VALUE;
             }
             if (settledSinceNs != Long.MIN_VALUE && t - settledSinceNs >= SETTLED_NS) {
+                TestPoint p = onset.point();
                 withdrawOnset(t, String.format(java.util.Locale.ROOT, "steady again at the entry for %.0f s, no %s"
                         + " found", SETTLED_NS / 1e9, active.kind.key()));
+                // quiet at the entry: armed again at once for the same point
+                onset.update(p, detector.state(), history, t);
+                onset.rearm(t);
             } else if (t - onset.departedNs() >= CONFIRM_NS) {
                 withdrawOnset(t, String.format(java.util.Locale.ROOT, "no %s found within %.0f s",
                         active.kind.key(), CONFIRM_NS / 1e9));

@@ -27,6 +27,7 @@ public final class LiveBegins {
     private int flagged;
     private int onTime;
     private int withdrawn;
+    private final List<String> details = new ArrayList<>();
 
     /** The events one session emitted, in order, and the sortie's truth. */
     public void add(SortieTruth truth, List<SessionEvent> events) {
@@ -53,6 +54,9 @@ public final class LiveBegins {
                 }
             }
             previousEndS = p.endS();
+            details.add(String.format(Locale.ROOT, "live.point: %s %s %s true begin %.2f s, shown %s", truth.sortie(),
+                    p.cardId(), p.kind(), p.beginS(), Double.isNaN(first) ? "never"
+                    : String.format(Locale.ROOT, "at %.2f s (%+.2f s)", first, first - p.beginS())));
             if (Double.isNaN(first)) {
                 continue;
             }
@@ -85,6 +89,11 @@ public final class LiveBegins {
             l[i] = latency.get(i);
         }
         return TimingSummary.of(l);
+    }
+
+    /** One {@code live.point:} line per true point: when it began and when the session showed it begun. */
+    public List<String> details() {
+        return List.copyOf(details);
     }
 
     /** {@code name: value} lines. */

@@ -39,9 +39,11 @@ import org.pointcall.shared.units.Units;
  *   <li>pitch doublet: pitch rate {@link #PITCH_Q_DEG} deg/s;</li>
  *   <li>phugoid: pitch rate {@link #PHUGOID_Q_DEG} deg/s, Nz moved {@link #PHUGOID_NZ} g or CAS rate
  *       {@link #CAS_RATE};</li>
- *   <li>sideslip: sideslip moved {@link #BETA_DEG} deg.</li>
+ *   <li>sideslip: sideslip moved {@link #BETA_DEG} deg or yaw rate {@link #YAW_DEG} deg/s (the rudder's first
+ *       effect).</li>
  * </ul>
- * A stabilised point has no departure (the session's condition watch begins it). The departure is dated to where the
+ * The throttle and the yaw rate (standard names {@link #THROTTLE}, {@link #YAW_RATE}) are read when the source
+ * has them. A stabilised point has no departure (the session's condition watch begins it). The departure is dated to where the
  * move began: the last instant its signal was within half its threshold of the armed value.
  *
  * <p>Fed every frame; allocates only when the point changes. Single-threaded.
@@ -77,6 +79,9 @@ final class OnsetWatch {
     static final long STALE_NS = 2_000_000_000L;
     /** The standard name of the power lever's position (percent of travel), read from the history when recorded. */
     static final String THROTTLE = "Throttle";
+    /** The standard name of the body yaw rate, read from the history when recorded. */
+    static final String YAW_RATE = "R";
+    static final double YAW_DEG = 1.5;
 
     // signals, smoothed
     private static final int NZ = 0;
@@ -86,11 +91,12 @@ final class OnsetWatch {
     private static final int BANK = 4;
     private static final int CAS_RATE_I = 5;
     private static final int THR = 6;
-    private static final int N = 7;
+    private static final int YAW = 7;
+    private static final int N = 8;
     private static final String[] NAMES = {"Nz", "roll rate", "pitch rate", "sideslip", "bank", "CAS rate",
-        "throttle"};
-    private static final String[] UNITS = {"g", "deg/s", "deg/s", "deg", "deg", "kt/s", "%"};
-    private static final double[] SHOW = {1, 1 / DEG, 1 / DEG, 1 / DEG, 1 / DEG, 1 / Units.MPS_PER_KT, 1};
+        "throttle", "yaw rate"};
+    private static final String[] UNITS = {"g", "deg/s", "deg/s", "deg", "deg", "kt/s", "%", "deg/s"};
+    private static final double[] SHOW = {1, 1 / DEG, 1 / DEG, 1 / DEG, 1 / DEG, 1 / Units.MPS_PER_KT, 1, 1 / DEG};
 
     private final double[] value = new double[N];
     private final long[] lastNs = new long[N];
@@ -128,6 +134,22 @@ final class OnsetWatch {
         point = null;
         bands.clear();
         disarm();
+    }
+
+    /**
+     * The move seen was not the point, and the flight is quiet again at the entry: armed again at once, on the values
+     * held now (the pilot may start the point at any moment).
+     */
+    void rearm(long nowNs) {
+        departedNs = NONE;
+        departureBeginNs = NONE;
+        cue = null;
+        armed = true;
+        armedNs = nowNs;
+        quietSinceNs = nowNs - ARM_NS;
+        followedNs = nowNs;
+        System.arraycopy(value, 0, base, 0, N);
+        java.util.Arrays.fill(nearNs, nowNs);
     }
 
     private void disarm() {
@@ -168,6 +190,9 @@ final class OnsetWatch {
             org.pointcall.shared.units.Unit u = h.unit(THROTTLE);
             double v = h.valueSi(THROTTLE, h.size() - 1);
             sample(THR, "%".equals(u.symbol()) ? u.fromSi(v) : 100 * v, nowNs, SMOOTHING_S);
+        }
+        if (!h.isEmpty() && h.has(YAW_RATE) && h.timeNs(h.size() - 1) == nowNs) {
+            sample(YAW, h.valueSi(YAW_RATE, h.size() - 1), nowNs, SMOOTHING_S);
         }
         if (p == null || departedNs != NONE || bands.isEmpty()) {
             return;
@@ -318,7 +343,10 @@ final class OnsetWatch {
                 cue(NZ, PHUGOID_NZ, 0);
                 cue(CAS_RATE_I, CAS_RATE, 0);
             }
-            case SIDESLIP -> cue(BETA, BETA_DEG * DEG, 0);
+            case SIDESLIP -> {
+                cue(BETA, BETA_DEG * DEG, 0);
+                cue(YAW, YAW_DEG * DEG, 0);
+            }
             case STABILISED -> {
             }
         }

@@ -37,17 +37,21 @@ class OnsetWatchTest {
     private static final TestPoint LOOP = new TestPoint("LP-1", ManoeuvreKind.LOOP, "loop", "", Double.NaN,
             List.of(AT_10000));
 
-    /** What the aircraft does at time t, s: {Hp ft, KCAS kt, Nz g, P deg/s, Q deg/s, bank deg, throttle %}. */
+    /**
+     * What the aircraft does at time t, s: {Hp ft, KCAS kt, Nz g, P deg/s, Q deg/s, bank deg, throttle %}, and
+     * optionally {R deg/s, AoS deg}.
+     */
     private interface Flight {
         double[] at(double t);
     }
 
     /** Feeds the flight; returns the watch at the end. */
     private static OnsetWatch fly(TestPoint p, double seconds, Flight flight, long seed) {
-        PointHistory h = PointHistory.of(DICT, List.of("Hp", "Throttle"), 4096);
+        PointHistory h = PointHistory.of(DICT, List.of("Hp", "Throttle", "R"), 4096);
         Frame f = Frame.forDictionary(DICT);
         int hp = DICT.indexOf("Hp");
         int thr = DICT.indexOf("Throttle");
+        int r = DICT.indexOf("R");
         PhysicalState s = new PhysicalState();
         Random noise = new Random(seed);
         OnsetWatch w = new OnsetWatch();
@@ -58,6 +62,7 @@ class OnsetWatchTest {
             f.timeNs(t);
             f.value(hp, v[0] + 3 * noise.nextGaussian());
             f.value(thr, v[6] + 0.2 * noise.nextGaussian());
+            f.value(r, (v.length > 7 ? v[7] : 0) + 0.3 * noise.nextGaussian());
             h.append(f);
             s.advance(t);
             s.set(PhysicalQuantity.HP, v[0] * Units.M_PER_FT);
@@ -66,7 +71,7 @@ class OnsetWatchTest {
             s.set(PhysicalQuantity.P, (v[3] + 2 * noise.nextGaussian()) * DEG);
             s.set(PhysicalQuantity.Q, (v[4] + 0.5 * noise.nextGaussian()) * DEG);
             s.set(PhysicalQuantity.ROLL, (v[5] + 0.2 * noise.nextGaussian()) * DEG);
-            s.set(PhysicalQuantity.AOS, 0.2 * noise.nextGaussian() * DEG);
+            s.set(PhysicalQuantity.AOS, ((v.length > 8 ? v[8] : 0) + 0.2 * noise.nextGaussian()) * DEG);
             w.update(p, s, h, t);
             if (w.departed()) {
                 break;
@@ -127,5 +132,28 @@ class OnsetWatchTest {
         }, 6);
         assertTrue(pull.departed() && s(pull.departedNs()) <= 20.5, "pull seen at " + s(pull.departedNs()) + " s");
         assertTrue(pull.cue().startsWith("Nz"), pull.cue());
+    }
+
+    @Test
+    void aSideslipsRudderIsSeenInTheYawRateBeforeTheSideslipBuilds() {
+        // from 20 s the rudder ramps in: the yaw rate 3 deg/s per second, the sideslip only 1 deg per second
+        TestPoint slip = new TestPoint("SS-1", ManoeuvreKind.SIDESLIP, "sideslip", "", Double.NaN, List.of(AT_10000));
+        OnsetWatch w = fly(slip, 40, t -> {
+            double in = Math.max(0, t - 20);
+            double[] v = stallEntry(t, 1e9, 10000, 0);
+            return new double[] {v[0], v[1], v[2], v[3], v[4], v[5], v[6], -Math.min(3, 3 * in), Math.min(8, in)};
+        }, 7);
+        assertTrue(w.departed() && s(w.departedNs()) <= 20.9, "seen at " + s(w.departedNs()) + " s: " + w.cue());
+        assertTrue(w.cue().startsWith("yaw rate"), w.cue());
+    }
+
+    @Test
+    void rearmedAfterAMoveThatWasNotThePointItIsArmedAtOnce() {
+        // a move seen (the session then found it was a set-up): re-armed on the values held now, no departure left
+        OnsetWatch w = fly(STALL, 25, t -> stallEntry(t, 20, 10000, 0), 8);
+        assertTrue(w.departed());
+        w.rearm(w.departedNs());
+        assertTrue(w.armed() && !w.departed());
+        assertEquals(OnsetWatch.NONE, w.departureBeginNs());
     }
 }

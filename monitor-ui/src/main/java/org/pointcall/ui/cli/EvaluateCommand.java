@@ -49,7 +49,8 @@ public final class EvaluateCommand implements Callable<Integer> {
                     + "print the error of every metric against the truth")
     boolean analysis;
 
-    @Option(names = "--details", description = "with --analysis: also one line per point and metric")
+    @Option(names = "--details", description = "with --analysis: also one line per point and metric; with "
+            + "--verdicts: one line per point, when it began and when the session showed it begun")
     boolean details;
 
     @Option(names = "--data", arity = "1..*", paramLabel = "DIR",
@@ -83,7 +84,7 @@ public final class EvaluateCommand implements Callable<Integer> {
     public Integer call() {
         PrintWriter w = spec.commandLine().getOut();
         if (verdicts) {
-            VerdictCheck.run(w, modelFile, cardFile, dictionaryFile, data, without);
+            VerdictCheck.run(w, modelFile, cardFile, dictionaryFile, data, without, details);
             return 0;
         }
         if (analysis) {

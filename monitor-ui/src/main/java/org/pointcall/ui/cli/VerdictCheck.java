@@ -29,7 +29,7 @@ final class VerdictCheck {
     }
 
     static void run(PrintWriter w, Path modelFile, Path cardFile, Path dictionaryFile, List<Path> data,
-                    List<String> without) {
+                    List<String> without, boolean details) {
         if (data.isEmpty()) {
             throw new PointcallException("--verdicts needs --data DIR... (simulated sorties with truth.json)");
         }
@@ -56,6 +56,9 @@ final class VerdictCheck {
             live.add(truth, events);
         }
         for (String l : agreement.lines()) {
+            w.println(l);
+        }
+        for (String l : details ? live.details() : List.<String>of()) {
             w.println(l);
         }
         for (String l : live.lines()) {
