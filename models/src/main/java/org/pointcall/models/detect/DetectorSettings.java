@@ -244,6 +244,14 @@ public record DetectorSettings(Smoothing smoothing, double smoothingS, double en
                 disabledRules, guards, boundaries);
     }
 
+    /** These rules switched off as well as those already off (some are off by default, as {@code accel-gain}). */
+    public DetectorSettings withRulesOff(java.util.Collection<String> names) {
+        Set<String> off = new TreeSet<>(disabledRules);
+        off.addAll(names);
+        return withDisabledRules(off);
+    }
+
+    /** Exactly these rules switched off (a rule off by default is on unless named). */
     public DetectorSettings withDisabledRules(Set<String> names) {
         return new DetectorSettings(smoothing, smoothingS, enterProbability, enterS, leaveProbability, leaveS,
                 edgeProbability, edgeDebounceS, maxRefineS, mergeGapS, switchMargin, switches, minDurationS,

@@ -1,6 +1,7 @@
 package org.pointcall.models.detect;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.pointcall.models.detect.PointEvent.Type.DISCARDED;
 import static org.pointcall.models.detect.PointEvent.Type.ENDED;
@@ -469,6 +470,11 @@ class BoundaryRulesTest {
         for (String name : BoundaryRules.NAMES) {
             DetectorSettings.defaults().withDisabledRules(Set.of(name));
         }
+        // switching one more off keeps those off by default off (accel-gain)
+        DetectorSettings more = DetectorSettings.defaults().withRulesOff(Set.of(BoundaryRules.CARD_ONSET));
+        assertFalse(more.ruleEnabled(BoundaryRules.ACCEL_GAIN));
+        assertFalse(more.ruleEnabled(BoundaryRules.CARD_ONSET));
+        assertTrue(more.ruleEnabled(BoundaryRules.HOLD_SIGNATURE));
         PointcallException e = org.junit.jupiter.api.Assertions.assertThrows(PointcallException.class,
                 () -> DetectorSettings.defaults().withDisabledRules(Set.of("begin-departures")));
         assertTrue(e.getMessage().contains("begin-departure"), e.getMessage());

@@ -33,7 +33,7 @@ final class VerdictCheck {
         if (data.isEmpty()) {
             throw new PointcallException("--verdicts needs --data DIR... (simulated sorties with truth.json)");
         }
-        DetectorSettings settings = DetectorSettings.defaults().withDisabledRules(new java.util.HashSet<>(without));
+        DetectorSettings settings = DetectorSettings.defaults().withRulesOff(without);
         LoadedModel<Classifier> model = DetectorModel.load(modelFile);
         VerdictAgreement agreement = new VerdictAgreement();
         LiveBegins live = new LiveBegins();

@@ -5,7 +5,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Set;
 
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
@@ -96,8 +95,8 @@ class CardOnsetTest {
         List<SessionEvent> on = new ArrayList<>();
         List<SessionEvent> off = new ArrayList<>();
         CardSession withRule = play(FLOWN, DetectorSettings.defaults(), on);
-        CardSession without = play(FLOWN, DetectorSettings.defaults()
-                .withDisabledRules(Set.of(BoundaryRules.CARD_ONSET)), off);
+        CardSession without = play(FLOWN, DetectorSettings.defaults().withRulesOff(List.of(BoundaryRules.CARD_ONSET)),
+                off);
         assertEquals(3, truth.points().size());
         for (PointTruth p : truth.points()) {
             double shown = shownBegunS(on, p.cardId());
