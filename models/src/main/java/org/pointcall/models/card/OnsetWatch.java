@@ -6,6 +6,7 @@ import java.util.List;
 import org.pointcall.models.analysis.PointHistory;
 import org.pointcall.models.detect.PhysicalQuantity;
 import org.pointcall.models.detect.PhysicalState;
+import org.pointcall.models.detect.SmoothedRate;
 import org.pointcall.shared.card.Band;
 import org.pointcall.shared.card.BandPhase;
 import org.pointcall.shared.card.TestPoint;
@@ -106,8 +107,8 @@ final class OnsetWatch {
     private final int[] sign = new int[N];
     /** Per signal, the last instant it was within half its threshold of the armed value. */
     private final long[] nearNs = new long[N];
-    private double cas = Double.NaN;
-    private long casNs = NONE;
+    /** CAS smoothed, and its rate (the CAS-rate signal). */
+    private final SmoothedRate cas = new SmoothedRate(CAS_SMOOTHING_S);
 
     private TestPoint point;
     private final List<Band> bands = new ArrayList<>();
@@ -383,28 +384,15 @@ final class OnsetWatch {
         if (!s.fresh(PhysicalQuantity.CAS) || !Double.isFinite(s.casMps())) {
             return;
         }
-        double v = s.casMps();
-        if (casNs == NONE || nowNs - casNs > STALE_NS) {
-            cas = v;
-            casNs = nowNs;
+        if (cas.lastNs() == NONE || nowNs - cas.lastNs() > STALE_NS) {
+            cas.clear();
             value[CAS_RATE_I] = Double.NaN;
-            return;
         }
-        double dt = (nowNs - casNs) * 1e-9;
-        if (dt <= 0) {
-            return;
+        cas.add(s.casMps(), nowNs);
+        if (!Double.isNaN(cas.rate())) {
+            value[CAS_RATE_I] = cas.rate();
+            lastNs[CAS_RATE_I] = nowNs;
         }
-        double a = 1 - Math.exp(-dt / CAS_SMOOTHING_S);
-        double before = cas;
-        cas += a * (v - cas);
-        double r = (cas - before) / dt;
-        if (Double.isNaN(value[CAS_RATE_I]) || lastNs[CAS_RATE_I] == NONE) {
-            value[CAS_RATE_I] = r;
-        } else {
-            value[CAS_RATE_I] += a * (r - value[CAS_RATE_I]);
-        }
-        lastNs[CAS_RATE_I] = nowNs;
-        casNs = nowNs;
     }
 
     private boolean fresh(int i, long nowNs) {

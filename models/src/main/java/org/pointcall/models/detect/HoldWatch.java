@@ -27,9 +27,7 @@ final class HoldWatch {
     static final long STALE_NS = 2_000_000_000L;
     static final long NONE = PointEvent.UNKNOWN_NS;
 
-    private final double[] value = new double[5];
-    private final double[] rate = new double[2];
-    private final long[] lastNs = new long[5];
+    private final SmoothedRate[] signal = new SmoothedRate[5];
     private long steadySinceNs = NONE;
     private long lastSteadyNs = NONE;
     private long unsteadySinceNs = NONE;
@@ -43,14 +41,17 @@ final class HoldWatch {
     private static final int P = 4;
 
     HoldWatch() {
+        for (int i = 0; i < signal.length; i++) {
+            signal[i] = new SmoothedRate(SMOOTHING_S);
+        }
         clear();
     }
 
     /** Forgets everything (a new stream). */
     void clear() {
-        java.util.Arrays.fill(value, Double.NaN);
-        java.util.Arrays.fill(rate, Double.NaN);
-        java.util.Arrays.fill(lastNs, NONE);
+        for (SmoothedRate x : signal) {
+            x.clear();
+        }
         reset();
     }
 
@@ -89,43 +90,29 @@ final class HoldWatch {
     }
 
     private void take(int i, PhysicalState s, PhysicalQuantity q, double v, long t) {
+        SmoothedRate x = signal[i];
         if (!s.fresh(q) || !Double.isFinite(v)) {
-            if (lastNs[i] != NONE && t - lastNs[i] > STALE_NS) {
-                value[i] = Double.NaN;
-                if (i < rate.length) {
-                    rate[i] = Double.NaN;
-                }
-                lastNs[i] = NONE;
+            if (x.lastNs() != NONE && t - x.lastNs() > STALE_NS) {
+                x.clear();
             }
             return;
         }
-        if (lastNs[i] == NONE) {
-            value[i] = v;
-            lastNs[i] = t;
-            return;
-        }
-        double dt = (t - lastNs[i]) * 1e-9;
-        if (dt <= 0) {
-            return;
-        }
-        double a = 1 - Math.exp(-dt / SMOOTHING_S);
-        double before = value[i];
-        value[i] += a * (v - value[i]);
-        if (i < rate.length) {
-            double r = (value[i] - before) / dt;
-            rate[i] = Double.isNaN(rate[i]) ? r : rate[i] + a * (r - rate[i]);
-        }
-        lastNs[i] = t;
+        x.add(v, t);
     }
 
     private boolean steadyNow(long t) {
-        if (Double.isNaN(rate[HP]) || Double.isNaN(rate[CAS])) {
+        double climb = signal[HP].rate();
+        double casRate = signal[CAS].rate();
+        double roll = signal[ROLL].value();
+        double nz = signal[NZ].value();
+        double p = signal[P].value();
+        if (Double.isNaN(climb) || Double.isNaN(casRate)) {
             return false;
         }
-        return Math.abs(rate[HP]) <= CLIMB_MPS && Math.abs(rate[CAS]) <= CAS_RATE_MPS2
-                && (Double.isNaN(value[ROLL]) || Math.abs(value[ROLL]) <= BANK_RAD)
-                && (Double.isNaN(value[NZ]) || Math.abs(value[NZ] - 1) <= NZ_OFF)
-                && (Double.isNaN(value[P]) || Math.abs(value[P]) <= P_RAD_S);
+        return Math.abs(climb) <= CLIMB_MPS && Math.abs(casRate) <= CAS_RATE_MPS2
+                && (Double.isNaN(roll) || Math.abs(roll) <= BANK_RAD)
+                && (Double.isNaN(nz) || Math.abs(nz - 1) <= NZ_OFF)
+                && (Double.isNaN(p) || Math.abs(p) <= P_RAD_S);
     }
 
     /** Start of the current steady run, or {@link #NONE}. */
