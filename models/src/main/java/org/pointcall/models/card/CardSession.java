@@ -168,7 +168,6 @@ public final class CardSession {
     /** A detection of another kind begun while the onset point waits: held until it is told (ended or discarded). */
     private PointEvent foreign;
     private long settledSinceNs = Long.MIN_VALUE;
-    private int onsetsWithdrawn;
     /** What the open onset point was begun from, for the console while it waits for the detector. */
     private String onsetNote;
     private long currentFrameNs;
@@ -494,11 +493,7 @@ public final class CardSession {
     private void withdrawOnset(long t, String why) {
         Active a = active;
         active = null;
-        onsetPoint = 0;
-        adopted = 0;
-        settledSinceNs = Long.MIN_VALUE;
-        onset.reset();
-        onsetsWithdrawn++;
+        forgetOnset();
         if (a == null) {
             return;
         }
@@ -507,6 +502,14 @@ public final class CardSession {
         }
         notice((a.point == null ? a.kind.key() : a.point.id()) + " begin withdrawn: " + why);
         emit(new SessionEvent.PointWithdrawn(t, a.detection, a.cardId(), why));
+    }
+
+    /** No onset point is open any more (told, withdrawn): the watch starts again on the card's next point. */
+    private void forgetOnset() {
+        onsetPoint = 0;
+        adopted = 0;
+        settledSinceNs = Long.MIN_VALUE;
+        onset.reset();
     }
 
     /** Stalls level or turning are one family: the detector tells which only at the break. */
@@ -577,7 +580,7 @@ public final class CardSession {
     /**
      * The card's next hold is begun once the aircraft is stabilised on its condition: every band inside and the
      * flight steady ({@link PointDetector#steadySinceNs}, the steadiness {@code hold-signature} asks for) for
-     * {@link #STABILISED_ON_NS}, and on condition for at least {@link #ON_CONDITION_MIN_NS} (a pass through the
+     * {@link PointDetector#STABILISE_NS}, and on condition for at least {@link #ON_CONDITION_MIN_NS} (a pass through the
      * condition in transit is neither). On condition but never that steady, it is begun once on condition for its
      * whole hold.
      */
@@ -586,12 +589,11 @@ public final class CardSession {
         if (steady == PointEvent.UNKNOWN_NS || w.onSinceNs() == ConditionWatch.NONE) {
             return false;
         }
-        return t - Math.max(steady, w.onSinceNs()) >= STABILISED_ON_NS && w.onForNs(t) >= ON_CONDITION_MIN_NS;
+        return t - Math.max(steady, w.onSinceNs()) >= PointDetector.STABILISE_NS
+                && w.onForNs(t) >= ON_CONDITION_MIN_NS;
     }
 
-    /** Steady on the condition this long, a hold is begun (common practice: stabilise, then mark), ns. */
-    static final long STABILISED_ON_NS = 2_000_000_000L;
-    /** ... and on condition at least this long, ns. */
+    /** A hold is begun once stabilised on its condition ({@link PointDetector#STABILISE_NS}) and on it this long, ns. */
     static final long ON_CONDITION_MIN_NS = 2_000_000_000L;
 
     /** Forgets the condition of every watch from index {@code from} on. */
@@ -666,9 +668,7 @@ public final class CardSession {
                 if (e.pointId() == onsetPoint && (e.type() == PointEvent.Type.ENDED
                         || e.type() == PointEvent.Type.DISCARDED)) {
                     // the onset point's flight is told: the watch goes on to the point after it
-                    onsetPoint = 0;
-                    adopted = 0;
-                    onset.reset();
+                    forgetOnset();
                 }
             }
             if (e.type() == PointEvent.Type.BEGUN && e.kind() == ManoeuvreKind.STABILISED
@@ -747,11 +747,6 @@ public final class CardSession {
     private void close(PointEvent e) {
         Active a = active;
         active = null;
-        if (onsetPoint != 0 && e.pointId() == onsetPoint) {
-            onsetPoint = 0;
-            adopted = 0;
-            onset.reset();
-        }
         if (a == null || a.detection != e.pointId()) {
             a = new Active(e, matcher == null ? null : matcher.bind(e.kind()).orElse(null));
         } else if (a.kind != e.kind()) {

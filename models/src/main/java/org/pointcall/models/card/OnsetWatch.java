@@ -99,16 +99,14 @@ final class OnsetWatch {
     private static final String[] UNITS = {"g", "deg/s", "deg/s", "deg", "deg", "kt/s", "%", "deg/s"};
     private static final double[] SHOW = {1, 1 / DEG, 1 / DEG, 1 / DEG, 1 / DEG, 1 / Units.MPS_PER_KT, 1, 1 / DEG};
 
-    private final double[] value = new double[N];
-    private final long[] lastNs = new long[N];
+    /** Per signal, smoothed; the CAS-rate signal is the rate of the smoothed CAS ({@link #v}). */
+    private final SmoothedRate[] signal = new SmoothedRate[N];
     private final double[] base = new double[N];
     /** Per signal, the threshold of the departure for the watched kind (0: not a cue), and its sign (0: either). */
     private final double[] threshold = new double[N];
     private final int[] sign = new int[N];
     /** Per signal, the last instant it was within half its threshold of the armed value. */
     private final long[] nearNs = new long[N];
-    /** CAS smoothed, and its rate (the CAS-rate signal). */
-    private final SmoothedRate cas = new SmoothedRate(CAS_SMOOTHING_S);
 
     private TestPoint point;
     private final List<Band> bands = new ArrayList<>();
@@ -121,8 +119,9 @@ final class OnsetWatch {
     private String cue;
 
     OnsetWatch() {
-        java.util.Arrays.fill(value, Double.NaN);
-        java.util.Arrays.fill(lastNs, NONE);
+        for (int i = 0; i < N; i++) {
+            signal[i] = new SmoothedRate(i == CAS_RATE_I ? CAS_SMOOTHING_S : SMOOTHING_S);
+        }
     }
 
     /** True when a point of this kind begins with a departure this watch can see. */
@@ -149,8 +148,15 @@ final class OnsetWatch {
         armedNs = nowNs;
         quietSinceNs = nowNs - ARM_NS;
         followedNs = nowNs;
-        System.arraycopy(value, 0, base, 0, N);
+        holdNow();
         java.util.Arrays.fill(nearNs, nowNs);
+    }
+
+    /** The armed values become the signals now. */
+    private void holdNow() {
+        for (int i = 0; i < N; i++) {
+            base[i] = v(i);
+        }
     }
 
     private void disarm() {
@@ -180,29 +186,28 @@ final class OnsetWatch {
                 cues(p.kind());
             }
         }
-        take(NZ, s, PhysicalQuantity.NZ, s.nz(), nowNs, SMOOTHING_S);
-        take(P, s, PhysicalQuantity.P, s.pRadS(), nowNs, SMOOTHING_S);
-        take(Q, s, PhysicalQuantity.Q, s.qRadS(), nowNs, SMOOTHING_S);
-        take(BETA, s, PhysicalQuantity.AOS, s.aosRad(), nowNs, SMOOTHING_S);
-        take(BANK, s, PhysicalQuantity.ROLL, s.rollRad(), nowNs, SMOOTHING_S);
-        casRate(s, nowNs);
-        if (!h.isEmpty() && h.has(THROTTLE) && h.timeNs(h.size() - 1) == nowNs) {
+        take(NZ, s, PhysicalQuantity.NZ, s.nz(), nowNs);
+        take(P, s, PhysicalQuantity.P, s.pRadS(), nowNs);
+        take(Q, s, PhysicalQuantity.Q, s.qRadS(), nowNs);
+        take(BETA, s, PhysicalQuantity.AOS, s.aosRad(), nowNs);
+        take(BANK, s, PhysicalQuantity.ROLL, s.rollRad(), nowNs);
+        take(CAS_RATE_I, s, PhysicalQuantity.CAS, s.casMps(), nowNs);
+        double throttle = newRow(h, THROTTLE, nowNs);
+        if (Double.isFinite(throttle)) {
             // in percent of travel, whatever the dictionary's unit (a fraction is taken as one)
             org.pointcall.shared.units.Unit u = h.unit(THROTTLE);
-            double v = h.valueSi(THROTTLE, h.size() - 1);
-            sample(THR, "%".equals(u.symbol()) ? u.fromSi(v) : 100 * v, nowNs, SMOOTHING_S);
+            sample(THR, "%".equals(u.symbol()) ? u.fromSi(throttle) : 100 * throttle, nowNs);
         }
-        if (!h.isEmpty() && h.has(YAW_RATE) && h.timeNs(h.size() - 1) == nowNs) {
-            sample(YAW, h.valueSi(YAW_RATE, h.size() - 1), nowNs, SMOOTHING_S);
-        }
+        sample(YAW, newRow(h, YAW_RATE, nowNs), nowNs);
         if (p == null || departedNs != NONE || bands.isEmpty()) {
             return;
         }
+        boolean near = nearStart(h, nowNs);
         if (!armed) {
-            if (quiet(nowNs) && nearStart(h, nowNs)) {
+            if (near && quiet(nowNs)) {
                 if (quietSinceNs == NONE) {
                     quietSinceNs = nowNs;
-                    System.arraycopy(value, 0, base, 0, N);
+                    holdNow();
                 }
                 follow(nowNs);
                 if (nowNs - quietSinceNs >= ARM_NS) {
@@ -218,7 +223,7 @@ final class OnsetWatch {
             if (threshold[i] <= 0 || !fresh(i, nowNs)) {
                 continue;
             }
-            double d = value[i] - base[i];
+            double d = v(i) - base[i];
             double signed = sign[i] == 0 ? Math.abs(d) : sign[i] * d;
             if (Math.abs(d) <= 0.5 * threshold[i]) {
                 nearNs[i] = nowNs;
@@ -231,16 +236,14 @@ final class OnsetWatch {
                 return;
             }
         }
-        if (quiet(nowNs) && nearStart(h, nowNs)) {
+        if (near && quiet(nowNs)) {
             follow(nowNs);
         } else if (fresh(THR, nowNs)) {
             // the throttle's held value follows its setting whatever the flight does: the pilot trims the power
             // while settling; only a step is the point's input
-            double dt = followedNs == NONE ? 0 : Math.min(1.0, (nowNs - followedNs) * 1e-9);
-            followedNs = nowNs;
-            base[THR] += (value[THR] - base[THR]) * (1 - Math.exp(-dt / THROTTLE_BASELINE_S));
+            base[THR] += (v(THR) - base[THR]) * (1 - Math.exp(-followedS(nowNs) / THROTTLE_BASELINE_S));
         }
-        if (!nearStart(h, nowNs)) {
+        if (!near) {
             // drifted off the start without a departure of the kind: set up again
             disarm();
         }
@@ -290,21 +293,19 @@ final class OnsetWatch {
         // Nz and the body rates against their own held values: a steady turn (more than 1 g, a steady pitch rate) is
         // quiet too
         boolean first = quietSinceNs == NONE;
-        return (first || Math.abs(value[NZ] - base[NZ]) <= QUIET_NZ)
-                && Math.abs(value[CAS_RATE_I]) <= QUIET_CAS_RATE
-                && (!fresh(P, nowNs) || Math.abs(value[P] - (first ? 0 : base[P])) <= QUIET_P)
-                && (!fresh(Q, nowNs) || first && Math.abs(value[Q]) <= QUIET_Q + Q_TURN
-                || !first && Math.abs(value[Q] - base[Q]) <= QUIET_Q);
+        return (first || Math.abs(v(NZ) - base[NZ]) <= QUIET_NZ)
+                && Math.abs(v(CAS_RATE_I)) <= QUIET_CAS_RATE
+                && (!fresh(P, nowNs) || Math.abs(v(P) - (first ? 0 : base[P])) <= QUIET_P)
+                && (!fresh(Q, nowNs) || first && Math.abs(v(Q)) <= QUIET_Q + Q_TURN
+                || !first && Math.abs(v(Q) - base[Q]) <= QUIET_Q);
     }
 
     /** The armed values follow quiet flight slowly. */
     private void follow(long nowNs) {
-        double dt = followedNs == NONE ? 0 : Math.min(1.0, (nowNs - followedNs) * 1e-9);
-        followedNs = nowNs;
-        double a = 1 - Math.exp(-dt / BASELINE_S);
+        double a = 1 - Math.exp(-followedS(nowNs) / BASELINE_S);
         for (int i = 0; i < N; i++) {
             if (fresh(i, nowNs)) {
-                base[i] = Double.isNaN(base[i]) ? value[i] : base[i] + (value[i] - base[i]) * a;
+                base[i] = Double.isNaN(base[i]) ? v(i) : base[i] + (v(i) - base[i]) * a;
                 if (!armed) {
                     nearNs[i] = nowNs;
                 }
@@ -358,45 +359,45 @@ final class OnsetWatch {
         sign[i] = s;
     }
 
-    private void take(int i, PhysicalState s, PhysicalQuantity q, double v, long nowNs, double tauS) {
+    private void take(int i, PhysicalState s, PhysicalQuantity q, double v, long nowNs) {
         if (s.fresh(q)) {
-            sample(i, v, nowNs, tauS);
+            sample(i, v, nowNs);
         }
     }
 
-    private void sample(int i, double v, long nowNs, double tauS) {
+    /** A finite sample into a signal; after a gap longer than {@link #STALE_NS} it starts again. */
+    private void sample(int i, double v, long nowNs) {
         if (!Double.isFinite(v)) {
             return;
         }
-        if (lastNs[i] == NONE || nowNs - lastNs[i] > STALE_NS || Double.isNaN(value[i])) {
-            value[i] = v;
-        } else {
-            double dt = (nowNs - lastNs[i]) * 1e-9;
-            if (dt <= 0) {
-                return;
-            }
-            value[i] += (v - value[i]) * (1 - Math.exp(-dt / tauS));
+        SmoothedRate x = signal[i];
+        if (x.lastNs() != NONE && nowNs - x.lastNs() > STALE_NS) {
+            x.clear();
         }
-        lastNs[i] = nowNs;
+        x.add(v, nowNs);
     }
 
-    private void casRate(PhysicalState s, long nowNs) {
-        if (!s.fresh(PhysicalQuantity.CAS) || !Double.isFinite(s.casMps())) {
-            return;
-        }
-        if (cas.lastNs() == NONE || nowNs - cas.lastNs() > STALE_NS) {
-            cas.clear();
-            value[CAS_RATE_I] = Double.NaN;
-        }
-        cas.add(s.casMps(), nowNs);
-        if (!Double.isNaN(cas.rate())) {
-            value[CAS_RATE_I] = cas.rate();
-            lastNs[CAS_RATE_I] = nowNs;
-        }
+    /** The history's value of {@code name} when its newest row is this frame's, else NaN. */
+    private static double newRow(PointHistory h, String name, long nowNs) {
+        return !h.isEmpty() && h.has(name) && h.timeNs(h.size() - 1) == nowNs ? h.valueSi(name, h.size() - 1)
+                : Double.NaN;
+    }
+
+    /** Signal {@code i} now: smoothed, the CAS rate the rate of smoothed CAS; NaN without one. */
+    private double v(int i) {
+        return i == CAS_RATE_I ? signal[i].rate() : signal[i].value();
+    }
+
+    /** Data time since the armed values last followed the flight, s (0 the first time, at most 1). */
+    private double followedS(long nowNs) {
+        double dt = followedNs == NONE ? 0 : Math.min(1.0, (nowNs - followedNs) * 1e-9);
+        followedNs = nowNs;
+        return dt;
     }
 
     private boolean fresh(int i, long nowNs) {
-        return lastNs[i] != NONE && nowNs - lastNs[i] <= STALE_NS && !Double.isNaN(value[i]);
+        long at = signal[i].lastNs();
+        return at != NONE && nowNs - at <= STALE_NS && !Double.isNaN(v(i));
     }
 
     /** The point watched, or null. */
@@ -442,7 +443,7 @@ final class OnsetWatch {
             return false;
         }
         for (int i = 0; i < N; i++) {
-            if (threshold[i] > 0 && fresh(i, nowNs) && Math.abs(value[i] - base[i]) > 0.5 * threshold[i]) {
+            if (threshold[i] > 0 && fresh(i, nowNs) && Math.abs(v(i) - base[i]) > 0.5 * threshold[i]) {
                 return false;
             }
         }

@@ -1322,7 +1322,8 @@ public final class PointDetector implements Detector {
 
     /**
      * Start of the current run of steady, unaccelerated, wings-level flight as {@code hold-signature} sees it
-     * ({@link HoldWatch}), or {@link PointEvent#UNKNOWN_NS} when the flight is not steady now.
+     * ({@link HoldWatch}), or {@link PointEvent#UNKNOWN_NS} when the flight is not steady now or that rule is off
+     * (the watch is then not fed).
      */
     public long steadySinceNs() {
         return holdWatch.holding() ? holdWatch.steadySinceNs() : NONE;
